@@ -1,1 +1,5 @@
 export {};
+export * from "./gardnerDensity.js";
+export * from "./nearMudlineDensity.js";
+export * from "./overburden.js";
+export * from "./hydrostatic.js";
