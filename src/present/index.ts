@@ -1,1 +1,9 @@
-export {};
+export * from "./palette.js";
+export * from "./escapeHtml.js";
+export * from "./figureSpec.js";
+export * from "./depthAxisSpec.js";
+export * from "./logTrackFigure.js";
+export * from "./pressureDepthFigure.js";
+export * from "./tableRecords.js";
+export * from "./caution.js";
+export * from "./notebookDisplay.js";
