@@ -202,7 +202,7 @@ export function mdAtTvdAlongSurvey(args: { survey: readonly SurveyStation[]; tvd
   let maxMd = Infinity, maxTvd = Infinity;
   let endFraction = 1;
   for (let k = 0; k < m; k++) {
-    if (p.td[k] <= 0) {
+    if (p.td[k] <= 1e-12) { // cos 90° rounds to 6e-17: treat |cos I| < 1e-12 as horizontal
       if (k === 0) {
         maxMd = p.md[0]; maxTvd = p.tvd[0]; lastSeg = -1;
       } else {
