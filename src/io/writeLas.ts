@@ -1,0 +1,210 @@
+/**
+ * LAS 2.0 writer (Canadian Well Logging Society, LAS Version 2.0, 1992; updates 2014, 2017).
+ * Output reads back through {@link readLas} to the same {@link LasFile} (numbers are written
+ * in shortest round-trip form unless a fixed precision is asked for).
+ */
+import { ShalepointError } from "../errors.js";
+import type { LasFile, LasHeaderItem } from "./lasTypes.js";
+
+/** Options of {@link writeLas}. */
+export interface WriteLasOptions {
+  /** Wrap records (index alone on a line, then values packed into lines ≤ 80 characters). Default: `las.wrap`. */
+  wrap?: boolean;
+  /**
+   * Fixed number of decimals for ~A values (0–15). Default: shortest text that reads back to
+   * the identical double (`String(x)`), which makes read → write → read exact.
+   */
+  precision?: number;
+}
+
+/** Longest line LAS 2.0 allows in wrapped data. */
+const WRAP_WIDTH = 80;
+
+function formatNumber(x: number, precision: number | undefined): string {
+  if (precision !== undefined) return x.toFixed(precision);
+  return Object.is(x, -0) ? "-0" : String(x);
+}
+
+function checkItem(item: LasHeaderItem, section: string): void {
+  const where = `${section} ${item.mnemonic}`;
+  const bad = (param: string, value: string, allowed: string): never => {
+    throw new ShalepointError("E_LAS_WRITE_HEADER", `cannot write ${where}: ${param} would not read back`, {
+      param,
+      value,
+      allowed,
+    });
+  };
+  if (item.mnemonic.trim().length === 0 || /[.\s]/.test(item.mnemonic.trim()) || item.mnemonic.trim() !== item.mnemonic) {
+    bad("mnemonic", item.mnemonic, "non-empty, no dot, no blanks");
+  }
+  if (/\s/.test(item.unit)) bad("unit", item.unit, "no blanks");
+  if (/[\r\n]/.test(item.value) || item.value.trim() !== item.value) bad("value", item.value, "one line, no leading/trailing blanks");
+  if (/[:\r\n]/.test(item.description) || item.description.trim() !== item.description) {
+    bad("description", item.description, "one line, no ':' and no leading/trailing blanks");
+  }
+}
+
+function headerLines(items: LasHeaderItem[], section: string): string[] {
+  const rows = items.map((it) => {
+    checkItem(it, section);
+    return { left: `${it.mnemonic}.${it.unit}`, value: it.value, description: it.description };
+  });
+  const wLeft = Math.max(0, ...rows.map((r) => r.left.length));
+  const wValue = Math.max(0, ...rows.map((r) => r.value.length));
+  return rows.map((r) => {
+    const text = ` ${r.left.padEnd(wLeft)}  ${r.value.padStart(wValue)} : ${r.description}`;
+    return text.replace(/\s+$/, "");
+  });
+}
+
+/** Put an item's value in place (or append it) without touching the caller's array. */
+function withItem(items: LasHeaderItem[], mnemonic: string, make: () => LasHeaderItem, replace: boolean): LasHeaderItem[] {
+  const i = items.findIndex((it) => it.mnemonic.toUpperCase() === mnemonic);
+  if (i === -1) return [...items, make()];
+  if (!replace) return items;
+  const out = items.slice();
+  out[i] = { ...items[i], value: make().value };
+  return out;
+}
+
+/**
+ * Write a {@link LasFile} as LAS 2.0 text.
+ *
+ * Sections in the standard's order `~V ~W ~C ~P ~O ~A`; `~P` and `~O` only when not empty.
+ * `WRAP` in `~V` is set to match the layout written. If `~W` lacks STRT, STOP, STEP or NULL,
+ * they are added from the data (STEP = the common index step, or 0 when irregular). NaN is
+ * written as the NULL value. Wrapped layout: each record starts with the index alone on its
+ * line, then the other values packed into lines of at most 80 characters.
+ *
+ * @param las the file to write (not modified)
+ * @param options `wrap` (default `las.wrap`), `precision` (fixed decimals 0–15; default
+ *   shortest round-trip text, which makes read → write → read exact)
+ * @returns the LAS text, lines ending in `\n`
+ * @throws ShalepointError `E_LAS_WRITE_SHAPE` when curves and data disagree in count or
+ *   length; `E_LAS_WRITE_VALUE` for ±Infinity; `E_LAS_WRITE_HEADER` for a header item that
+ *   would not read back (a dot or blank in a mnemonic, a blank in a unit, a ':' in a
+ *   description); `E_RANGE` for a bad precision
+ * @example
+ * writeLas(readLas(text).las) // text that readLas turns back into the same LasFile
+ * Reference: Canadian Well Logging Society (1992), LAS Version 2.0 — A Digital Standard for Logging Data.
+ */
+export function writeLas(las: LasFile, options: WriteLasOptions = {}): string {
+  const wrap = options.wrap ?? las.wrap;
+  const precision = options.precision;
+  if (precision !== undefined && !(Number.isInteger(precision) && precision >= 0 && precision <= 15)) {
+    throw new ShalepointError("E_RANGE", "precision must be an integer from 0 to 15", { param: "precision", value: precision, allowed: "0…15" });
+  }
+  const nCurves = las.curves.length;
+  if (nCurves === 0 || las.data.length !== nCurves) {
+    throw new ShalepointError("E_LAS_WRITE_SHAPE", "curves and data columns differ in number", {
+      param: "data",
+      value: `${nCurves} curves, ${las.data.length} columns`,
+      hint: "LasFile.data needs one array per ~C curve, index first.",
+    });
+  }
+  const nRows = las.data[0].length;
+  for (let j = 1; j < nCurves; j++) {
+    if (las.data[j].length !== nRows) {
+      throw new ShalepointError("E_LAS_WRITE_SHAPE", `curve ${las.curves[j].mnemonic} has a different length from the index`, {
+        param: `data[${j}]`,
+        value: `${las.data[j].length} vs ${nRows}`,
+      });
+    }
+  }
+  const nullText = formatNumber(las.nullValue, undefined);
+  const index = las.data[0];
+  const indexUnit = las.curves[0].unit;
+
+  // ---- header sections ----------------------------------------------------------------------
+  let version = withItem(las.version, "VERS", () => ({ mnemonic: "VERS", unit: "", value: "2.0", description: "LAS format version 2.0" }), false);
+  version = withItem(version, "WRAP", () => ({ mnemonic: "WRAP", unit: "", value: wrap ? "YES" : "NO", description: wrap ? "records span lines" : "one line per index step" }), true);
+
+  let well = las.well;
+  if (nRows > 0) {
+    well = withItem(well, "STRT", () => ({ mnemonic: "STRT", unit: indexUnit, value: formatNumber(index[0], undefined), description: "first index value" }), false);
+    well = withItem(well, "STOP", () => ({ mnemonic: "STOP", unit: indexUnit, value: formatNumber(index[nRows - 1], undefined), description: "last index value" }), false);
+    well = withItem(well, "STEP", () => ({ mnemonic: "STEP", unit: indexUnit, value: formatNumber(commonStep(index), undefined), description: "index step (0 = irregular)" }), false);
+  }
+  well = withItem(well, "NULL", () => ({ mnemonic: "NULL", unit: "", value: nullText, description: "missing value" }), false);
+
+  const out: string[] = [];
+  out.push("~Version");
+  out.push(...headerLines(version, "~V"));
+  out.push("~Well");
+  out.push(...headerLines(well, "~W"));
+  out.push("~Curves");
+  out.push(...headerLines(las.curves, "~C"));
+  if (las.parameters.length > 0) {
+    out.push("~Parameters");
+    out.push(...headerLines(las.parameters, "~P"));
+  }
+  if (las.other.length > 0) {
+    out.push("~Other");
+    for (const line of las.other.split("\n")) {
+      const t = line.trim();
+      if (t.length === 0 || t.startsWith("#") || t.startsWith("~")) {
+        throw new ShalepointError("E_LAS_WRITE_HEADER", "~O line would not read back (blank, '#' or '~' first)", { param: "other", value: line });
+      }
+      out.push(line);
+    }
+  }
+  out.push("~A");
+
+  // ---- data: format every value, then pad each column to its widest text ---------------------
+  const texts: string[][] = [];
+  const widths: number[] = [];
+  for (let j = 0; j < nCurves; j++) {
+    const col = las.data[j];
+    const t: string[] = new Array(nRows);
+    let w = 0;
+    for (let i = 0; i < nRows; i++) {
+      const x = col[i];
+      let s: string;
+      if (Number.isNaN(x)) s = nullText;
+      else if (!Number.isFinite(x)) {
+        throw new ShalepointError("E_LAS_WRITE_VALUE", `curve ${las.curves[j].mnemonic} holds an infinite value`, {
+          param: las.curves[j].mnemonic,
+          row: i + 1,
+          value: String(x),
+          hint: "Replace ±Infinity by NaN (written as NULL) before writing.",
+        });
+      } else s = formatNumber(x, precision);
+      t[i] = s;
+      if (s.length > w) w = s.length;
+    }
+    texts.push(t);
+    widths.push(w);
+  }
+  const lines: string[] = [];
+  for (let i = 0; i < nRows; i++) {
+    if (!wrap) {
+      let s = texts[0][i].padStart(widths[0]);
+      for (let j = 1; j < nCurves; j++) s += " " + texts[j][i].padStart(widths[j]);
+      lines.push(s);
+    } else {
+      lines.push(texts[0][i]);
+      let s = "";
+      for (let j = 1; j < nCurves; j++) {
+        const v = texts[j][i].padStart(Math.min(widths[j], WRAP_WIDTH - 1));
+        if (s.length > 0 && s.length + 1 + v.length > WRAP_WIDTH) {
+          lines.push(s);
+          s = "";
+        }
+        s = s.length === 0 ? v : s + " " + v;
+      }
+      if (s.length > 0) lines.push(s);
+    }
+  }
+  return out.join("\n") + "\n" + (lines.length > 0 ? lines.join("\n") + "\n" : "");
+}
+
+/** The step shared by all consecutive index values, or 0 when sampling is irregular. */
+function commonStep(index: ArrayLike<number>): number {
+  if (index.length < 2) return 0;
+  const step = index[1] - index[0];
+  const tol = 1e-6 * Math.abs(step);
+  for (let i = 2; i < index.length; i++) {
+    if (Math.abs(index[i] - index[i - 1] - step) > tol) return 0;
+  }
+  return Number(step.toPrecision(12)); // drop binary noise such as 0.09999999999999432
+}
