@@ -1,0 +1,230 @@
+/**
+ * Equivalent-depth method: equal shale log value means equal vertical effective stress.
+ *
+ * Reference: Foster, J.B. and Whalen, H.E., 1966, "Estimation of formation pressures from
+ * electrical surveys — offshore Louisiana", Journal of Petroleum Technology 18(2):165–171
+ * (citation from memory; the paper states the principle graphically rather than as a
+ * numbered equation). In stresses: Pp(Z) = Sv(Z) − [Sv(Ze) − Ph(Ze)], where Ze is the
+ * shallower depth at which the normal compaction trend equals the observed log value at Z.
+ *
+ * Imports: ../errors.js and the sibling porePressureFlags.ts.
+ */
+import { ShalepointError } from "../errors.js";
+import {
+  PP_FLAG_CLIPPED_AT_HYDROSTATIC,
+  PP_FLAG_MISSING_INPUT,
+  PP_FLAG_NO_EQUIVALENT_DEPTH,
+  checkLimitOptions,
+  finishPorePressure,
+  requireLengths,
+  type PorePressureResult,
+} from "./porePressureFlags.js";
+
+/**
+ * A normal compaction trend as a function of TVD below RT (ft), or sampled on its own
+ * increasing depth array (linear interpolation between samples, NaN outside them). Either
+ * form must be strictly monotonic over the search interval (slowness falling with depth,
+ * resistivity rising): only then is the equivalent depth unique.
+ */
+export type EquivalentDepthTrend =
+  | { kind: "function"; valueAtTvdFt: (tvdFt: number) => number }
+  | { kind: "sampled"; tvdFt: ArrayLike<number>; values: ArrayLike<number> };
+
+/** Equivalent-depth pore pressure with the matched depth and the effective stress. */
+export interface EquivalentDepthResult extends PorePressureResult {
+  /** Ze, ft TVD below RT; NaN where none was found or input was missing. */
+  equivalentDepthFt: Float64Array;
+  /** σ = Sv(Ze) − Ph(Ze), psi; NaN where none. */
+  effectiveStressPsi: Float64Array;
+}
+
+/** Linear interpolation in a non-decreasing abscissa; NaN outside [x0, xn-1]. */
+function interpolate(x: ArrayLike<number>, y: ArrayLike<number>, xq: number): number {
+  const n = x.length;
+  if (!(n > 0 && xq >= x[0] && xq <= x[n - 1])) return NaN;
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (x[mid] <= xq) lo = mid;
+    else hi = mid;
+  }
+  if (x[hi] === x[lo]) return y[lo];
+  const t = (xq - x[lo]) / (x[hi] - x[lo]);
+  if (t <= 0) return y[lo];
+  if (t >= 1) return y[hi];
+  return y[lo] + t * (y[hi] - y[lo]);
+}
+
+function notMonotonic(what: string, value: unknown): never {
+  throw new ShalepointError("E_NOT_MONOTONIC", `${what} must be strictly monotonic with depth`, {
+    param: "trend",
+    value,
+    hint: "Equivalent depth needs a one-to-one trend (slowness falling or resistivity rising with depth).",
+  });
+}
+
+/** Number of points at which a function trend is checked for monotonicity. */
+const FUNCTION_TREND_CHECK_POINTS = 65;
+
+/**
+ * Equivalent-depth pore pressure (Foster & Whalen 1966).
+ *
+ * For each sample at depth Z with observed value x: find Ze in [searchTop, Z] with
+ * trend(Ze) = x, by bisection on the monotonic trend (relative depth tolerance 1e-12, at
+ * most 200 steps); then σ = Sv(Ze) − Ph(Ze) with Sv, Ph linearly interpolated in the well's
+ * arrays, and Pp = Sv(Z) − σ.
+ *
+ * When no Ze exists:
+ * - x at or beyond the trend at Z on the compacted side (faster or more resistive than
+ *   normal): Ze = Z and Pp = Ph; flagged PP_FLAG_CLIPPED_AT_HYDROSTATIC when strictly beyond
+ *   (the method cannot give underpressure).
+ * - x less compacted than the trend at the search top (or the trend undefined at Z):
+ *   Pp = NaN, flagged PP_FLAG_NO_EQUIVALENT_DEPTH.
+ * NaN in Sv, Ph or x gives NaN with PP_FLAG_MISSING_INPUT.
+ *
+ * @param input.tvdFt TVD below RT per sample, ft, non-decreasing
+ * @param input.overburdenPsi Sv per sample, psi
+ * @param input.hydrostaticPsi Ph per sample, psi
+ * @param input.observed shale log per sample in the trend's unit (e.g. slowness 110 µs/ft)
+ * @param input.trend {@link EquivalentDepthTrend}
+ * @param input.searchTopTvdFt shallowest depth Ze may take, ft (default: first sample with finite Sv and Ph)
+ * @param input.floorAtHydrostatic, input.calibratedRangeTvdFt as for every method
+ * @returns ppPsi (psi), flags, warnings, equivalentDepthFt (ft), effectiveStressPsi (psi)
+ * @throws ShalepointError E_LENGTH on length mismatch; E_NOT_SORTED when tvdFt decreases;
+ *   E_NOT_MONOTONIC when the trend is not strictly monotonic; E_RANGE for a bad searchTopTvdFt
+ * @example
+ * // S/D 1.0 psi/ft, Ph/D 0.465 psi/ft; trend 200 − 0.01·z µs/ft; 120 µs/ft at 12,000 ft matches 8000 ft
+ * equivalentDepthPorePressure({ tvdFt: [0, 8000, 12000], overburdenPsi: [0, 8000, 12000],
+ *   hydrostaticPsi: [0, 3720, 5580], observed: [200, 120, 120],
+ *   trend: { kind: "function", valueAtTvdFt: (z) => 200 - 0.01 * z } }).ppPsi[2] // 7720 psi
+ * @see Foster & Whalen 1966, JPT 18(2):165–171 (from memory)
+ */
+export function equivalentDepthPorePressure(input: {
+  tvdFt: ArrayLike<number>;
+  overburdenPsi: ArrayLike<number>;
+  hydrostaticPsi: ArrayLike<number>;
+  observed: ArrayLike<number>;
+  trend: EquivalentDepthTrend;
+  searchTopTvdFt?: number;
+  floorAtHydrostatic?: boolean;
+  calibratedRangeTvdFt?: { topFt: number; baseFt: number };
+}): EquivalentDepthResult {
+  const { tvdFt, overburdenPsi, hydrostaticPsi, observed, trend } = input;
+  const n = tvdFt.length;
+  requireLengths(n, { tvdFt, overburdenPsi, hydrostaticPsi, observed });
+  checkLimitOptions(n, input);
+  for (let i = 1; i < n; i++) {
+    if (tvdFt[i] < tvdFt[i - 1]) {
+      throw new ShalepointError("E_NOT_SORTED", "tvdFt must be non-decreasing", { param: "tvdFt", value: tvdFt[i], unit: "ft", row: i });
+    }
+  }
+
+  // The trend as a function of depth.
+  let trendAt: (z: number) => number;
+  if (trend.kind === "sampled") {
+    const tz = trend.tvdFt;
+    const tv = trend.values;
+    requireLengths(tz.length, { "trend.tvdFt": tz, "trend.values": tv });
+    if (tz.length < 2) {
+      throw new ShalepointError("E_TOO_FEW", "a sampled trend needs at least 2 samples", { param: "trend.tvdFt", value: tz.length, allowed: "≥ 2" });
+    }
+    const dir = Math.sign(tv[1] - tv[0]);
+    for (let k = 1; k < tz.length; k++) {
+      if (!(tz[k] > tz[k - 1])) notMonotonic("trend.tvdFt", tz[k]);
+      if (!(Math.sign(tv[k] - tv[k - 1]) === dir && dir !== 0)) notMonotonic("trend.values", tv[k]);
+    }
+    trendAt = (z) => interpolate(tz, tv, z);
+  } else {
+    trendAt = trend.valueAtTvdFt;
+  }
+
+  // Search top: first sample with finite Sv and Ph unless given.
+  let top = input.searchTopTvdFt ?? NaN;
+  if (input.searchTopTvdFt === undefined) {
+    for (let i = 0; i < n; i++) {
+      if (Number.isFinite(overburdenPsi[i]) && Number.isFinite(hydrostaticPsi[i]) && Number.isFinite(tvdFt[i])) {
+        top = tvdFt[i];
+        break;
+      }
+    }
+  } else if (!Number.isFinite(top)) {
+    throw new ShalepointError("E_RANGE", "searchTopTvdFt must be finite", { param: "searchTopTvdFt", value: top, unit: "ft" });
+  }
+
+  const raw = new Float64Array(n).fill(NaN);
+  const ze = new Float64Array(n).fill(NaN);
+  const sig = new Float64Array(n).fill(NaN);
+  const flags = new Uint8Array(n);
+  if (!Number.isFinite(top) || n === 0) {
+    for (let i = 0; i < n; i++) flags[i] = PP_FLAG_MISSING_INPUT;
+    const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth");
+    return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
+  }
+
+  // Direction of compaction over the well (sign of trend change with depth), and a
+  // monotonicity check of a function trend on a grid.
+  const bottom = tvdFt[n - 1];
+  const tTop = trendAt(top);
+  const tBottom = trendAt(bottom);
+  const s = Math.sign(tBottom - tTop);
+  if (!(s !== 0 && Number.isFinite(s))) notMonotonic("trend", { top: tTop, bottom: tBottom });
+  if (trend.kind === "function" && bottom > top) {
+    let prev = tTop;
+    for (let k = 1; k < FUNCTION_TREND_CHECK_POINTS; k++) {
+      const cur = trendAt(top + ((bottom - top) * k) / (FUNCTION_TREND_CHECK_POINTS - 1));
+      if (!(Math.sign(cur - prev) === s)) notMonotonic("trend", cur);
+      prev = cur;
+    }
+  }
+
+  for (let i = 0; i < n; i++) {
+    const z = tvdFt[i];
+    const x = observed[i];
+    const sv = overburdenPsi[i];
+    const ph = hydrostaticPsi[i];
+    if (!(Number.isFinite(z) && Number.isFinite(x) && Number.isFinite(sv) && Number.isFinite(ph))) {
+      flags[i] = PP_FLAG_MISSING_INPUT;
+      continue;
+    }
+    const tz = trendAt(z);
+    if (!Number.isFinite(tz) || z < top) {
+      flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
+      continue;
+    }
+    const d = (x - tz) * s;
+    if (d >= 0) {
+      // Normal or more compacted than the trend at Z: Ze = Z, Pp = Ph.
+      ze[i] = z;
+      sig[i] = sv - ph;
+      raw[i] = ph;
+      if (d > 0) flags[i] = PP_FLAG_CLIPPED_AT_HYDROSTATIC;
+      continue;
+    }
+    if ((x - tTop) * s < 0) {
+      flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
+      continue;
+    }
+    // Bisection: g(ze) = (trend(ze) − x)·s is ≤ 0 at lo and > 0 at hi.
+    let lo = top;
+    let hi = z;
+    const tol = 1e-12 * Math.max(1, Math.abs(z));
+    for (let k = 0; k < 200 && hi - lo > tol; k++) {
+      const mid = 0.5 * (lo + hi);
+      if ((trendAt(mid) - x) * s <= 0) lo = mid;
+      else hi = mid;
+    }
+    const zE = 0.5 * (lo + hi);
+    const svE = interpolate(tvdFt, overburdenPsi, zE);
+    const phE = interpolate(tvdFt, hydrostaticPsi, zE);
+    if (!(Number.isFinite(svE) && Number.isFinite(phE))) {
+      flags[i] = PP_FLAG_MISSING_INPUT;
+      continue;
+    }
+    ze[i] = zE;
+    sig[i] = svE - phE;
+    raw[i] = sv - (svE - phE);
+  }
+  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth");
+  return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
+}
