@@ -1,1 +1,9 @@
-export {};
+export * from "./sampleWindow.js";
+export * from "./smoothRollingMedian.js";
+export * from "./smoothMovingAverage.js";
+export * from "./despikeLog.js";
+export * from "./flagBadHole.js";
+export * from "./summarizeLogQc.js";
+export * from "./gammaRayIndex.js";
+export * from "./vshaleFromGammaRay.js";
+export * from "./pickShalePoints.js";
