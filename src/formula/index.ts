@@ -1,1 +1,1 @@
-export {};
+export * from "./compileCurveFormula.js";
