@@ -1,0 +1,168 @@
+/**
+ * writeLas: read → write → read exactness on every good fixture and on random data, the
+ * LAS 2.0 wrapped-line limit of 80 characters (CWLS LAS 2.0, 1992 — published, CHECK-VALUES
+ * §12), NaN written as NULL, and an independent read of the output by las-js 3.4.2.
+ */
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { Las } from "las-js";
+import { readLas, type ReadLasOptions } from "../../src/io/readLas.js";
+import { writeLas } from "../../src/io/writeLas.js";
+import type { LasFile } from "../../src/io/lasTypes.js";
+import { ShalepointError } from "../../src/errors.js";
+
+const dir = new URL("../fixtures/las/", import.meta.url);
+const fixture = (name: string): string => readFileSync(new URL(name, dir), "latin1");
+
+/** LasFile without the source line numbers (they differ between the original and the copy). */
+function strip(las: LasFile): LasFile {
+  const noLine = (items: LasFile["well"]) => items.map(({ mnemonic, unit, value, description }) => ({ mnemonic, unit, value, description }));
+  return { ...las, version: noLine(las.version), well: noLine(las.well), curves: noLine(las.curves), parameters: noLine(las.parameters) };
+}
+
+function deepFreeze(las: LasFile): LasFile {
+  for (const part of [las.version, las.well, las.curves, las.parameters]) {
+    part.forEach((it) => Object.freeze(it));
+    Object.freeze(part);
+  }
+  Object.freeze(las.data);
+  return Object.freeze(las);
+}
+
+const GOOD: [string, ReadLasOptions["policy"]?][] = [
+  ["basic.las"],
+  ["crlf.las"],
+  ["tabs-and-blank-lines.las"],
+  ["null-9999.las"],
+  ["wrapped.las"],
+  ["negative-step.las"],
+  ["irregular-step.las"],
+  ["duplicate-mnemonic.las"],
+  ["metric.las"],
+  ["unknown-unit.las"],
+];
+
+describe("writeLas round trip", () => {
+  for (const [name, policy] of GOOD) {
+    it(`readLas(writeLas(readLas(${name}))) is the same LasFile`, () => {
+      const first = deepFreeze(readLas(fixture(name), { policy }).las);
+      const text = writeLas(first);
+      const second = readLas(text).las;
+      expect(strip(second)).toEqual(strip(first));
+      // and the other layout gives the same data
+      const other = readLas(writeLas(first, { wrap: !first.wrap })).las;
+      expect(other.data).toEqual(first.data);
+      expect(other.wrap).toBe(!first.wrap);
+    });
+  }
+
+  it("writeLas(…, { wrap: true }) keeps every line ≤ 80 characters and puts the index alone first (LAS 2.0, published)", () => {
+    const n = 3;
+    const curves = [{ mnemonic: "DEPT", unit: "F", value: "", description: "depth" }];
+    const data = [Float64Array.from([9000, 9000.5, 9001])];
+    for (let j = 0; j < 30; j++) {
+      curves.push({ mnemonic: `C${j}`, unit: "", value: "", description: `curve ${j}` });
+      data.push(Float64Array.from({ length: n }, (_, i) => -1234.56789012345 * (i + 1) * (j + 1)));
+    }
+    const las: LasFile = { version: [], well: [], curves, parameters: [], other: "", data, wrap: true, nullValue: -999.25 };
+    const text = writeLas(las);
+    const aLines = text.split("~A\n")[1].trimEnd().split("\n");
+    for (const l of text.split("\n")) expect(l.length).toBeLessThanOrEqual(80);
+    expect(aLines[0]).toBe("9000");
+    expect(readLas(text).las.data).toEqual(data);
+  });
+
+  it("writeLas writes NaN as the NULL value and adds STRT/STOP/STEP/NULL when missing", () => {
+    const las: LasFile = {
+      version: [],
+      well: [{ mnemonic: "WELL", unit: "", value: "QUILLON A-1", description: "well name" }],
+      curves: [
+        { mnemonic: "DEPT", unit: "F", value: "", description: "depth" },
+        { mnemonic: "GR", unit: "GAPI", value: "", description: "gamma ray" },
+      ],
+      parameters: [],
+      other: "",
+      data: [Float64Array.from([100, 100.1, 100.2]), Float64Array.from([50, NaN, 52])],
+      wrap: false,
+      nullValue: -9999,
+    };
+    const text = writeLas(las);
+    expect(text).toMatch(/^\s*100\.1\s+-9999$/m);
+    const back = readLas(text).las;
+    expect(Array.from(back.data[1])).toEqual([50, NaN, 52]);
+    const item = (m: string) => back.well.find((w) => w.mnemonic === m)?.value;
+    expect(item("STRT")).toBe("100");
+    expect(item("STOP")).toBe("100.2");
+    // 100.1 − 100 = 0.09999999999999432 in binary; written as 0.1 (12 significant digits)
+    expect(item("STEP")).toBe("0.1");
+    expect(item("NULL")).toBe("-9999");
+  });
+
+  it("writeLas(…, { precision: 2 }) writes fixed decimals", () => {
+    const { las } = readLas(fixture("basic.las"));
+    const back = readLas(writeLas(las, { precision: 2 })).las;
+    // RHOB 2.334 → "2.33"; 9000.5 → "9000.50"
+    expect(back.data[3][1]).toBe(2.33);
+    expect(back.data[0][1]).toBe(9000.5);
+  });
+
+  it("random data (finite doubles, NaN, -0) survives read → write → read bit for bit", () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 6 }),
+        fc.array(fc.double({ min: 0.001, max: 50, noNaN: true }), { minLength: 1, maxLength: 30 }),
+        fc.array(fc.oneof(fc.double({ noDefaultInfinity: true }), fc.constant(-0)), { minLength: 180, maxLength: 180 }),
+        fc.boolean(),
+        (nCurves, steps, pool, wrap) => {
+          const n = steps.length;
+          const index = new Float64Array(n);
+          for (let i = 1; i < n; i++) index[i] = index[i - 1] + steps[i];
+          const curves = [{ mnemonic: "DEPT", unit: "M", value: "", description: "depth" }];
+          const data = [index];
+          for (let j = 0; j < nCurves; j++) {
+            curves.push({ mnemonic: `X${j}`, unit: "", value: "", description: "" });
+            data.push(Float64Array.from({ length: n }, (_, i) => {
+              const v = pool[(i * 7 + j * 31) % pool.length];
+              return v === -999.25 ? 0 : v;
+            }));
+          }
+          const las: LasFile = { version: [], well: [], curves, parameters: [], other: "", data, wrap, nullValue: -999.25 };
+          const back = readLas(writeLas(las), { policy: { allowStepMismatch: true } }).las;
+          back.data.forEach((c, j) => c.forEach((v, i) => expect(Object.is(v, data[j][i])).toBe(true)));
+        },
+      ),
+      { numRuns: 150, seed: 7 },
+    );
+  });
+
+  it("las-js 3.4.2 reads writeLas output to the same values", async () => {
+    const { las } = readLas(fixture("null-9999.las"));
+    const text = writeLas(las);
+    const ref = new Las(text, { loadFile: false });
+    expect(await ref.header()).toEqual(las.curves.map((c) => c.mnemonic));
+    const rows = await ref.data();
+    rows.forEach((row, i) => row.forEach((v, j) => (Number.isNaN(las.data[j][i]) ? expect(v).toBe(-9999) : expect(v).toBe(las.data[j][i]))));
+  });
+});
+
+describe("writeLas errors", () => {
+  const base = (): LasFile => readLas(fixture("irregular-step.las")).las;
+  it("writeLas refuses a description with ':' (would not read back)", () => {
+    const las = base();
+    las.curves[1] = { ...las.curves[1], description: "gamma: ray" };
+    expect(() => writeLas(las)).toThrow(ShalepointError);
+    try {
+      writeLas(las);
+    } catch (e) {
+      expect((e as ShalepointError).code).toBe("E_LAS_WRITE_HEADER");
+    }
+  });
+  it("writeLas refuses ±Infinity and mismatched column lengths", () => {
+    const las = base();
+    const inf = { ...las, data: [las.data[0], Float64Array.from([1, Infinity, 3, 4])] };
+    expect(() => writeLas(inf)).toThrow(/infinite/);
+    const short = { ...las, data: [las.data[0], Float64Array.from([1, 2])] };
+    expect(() => writeLas(short)).toThrow(/different length/);
+  });
+});
