@@ -4,8 +4,8 @@
  *
  * Reference: Bowers, G.L., 1995, SPE Drilling & Completion 10(2):89–95, SPE-27488 (from
  * memory): on this crossplot, normally compacted shale follows the virgin curve
- * V = V0 + A σ^B; unloaded shale plots below it, on a flatter curve that leaves the virgin
- * curve at (σmax, Vmax).
+ * V = V0 + A σ^B; unloaded shale plots above it at lower σ, on a flatter curve that leaves
+ * the virgin curve at (σmax, Vmax).
  *
  * Imports: ../errors.js and the siblings bowersCurves.ts, porePressureFlags.ts.
  */
@@ -38,8 +38,9 @@ export interface BowersCrossplotData {
     /** Observed velocity, ft/s. */
     velocityFtPerS: Float64Array;
     /**
-     * Observed minus virgin-curve velocity at the point's σ, ft/s. Strongly negative at
-     * high σ marks unloaded rock: the first such points show where unloading starts.
+     * Observed minus virgin-curve velocity at the point's σ, ft/s. Near zero on the virgin
+     * curve; clearly positive where σ comes from measured pressures in unloaded rock (the
+     * velocity stayed high while σ fell), so the first such points show where unloading starts.
      */
     departureFromVirginFtPerS: Float64Array;
   };
