@@ -70,11 +70,14 @@ export function despikeLog(args: {
   const idx: number[] = [];
   const buf = new Float64Array(w);
   const dev = new Float64Array(w);
-  const median = (a: Float64Array, m: number): number => {
-    // a[0..m) sorted in place first
-    const s = a.subarray(0, m).sort();
-    return m % 2 === 1 ? s[(m - 1) >> 1] : 0.5 * (s[m / 2 - 1] + s[m / 2]);
+  /** Insert v into the sorted prefix a[0..m) (insertion sort: fastest for short windows). */
+  const insert = (a: Float64Array, m: number, v: number): void => {
+    let k = m;
+    while (k > 0 && a[k - 1] > v) { a[k] = a[k - 1]; k--; }
+    a[k] = v;
   };
+  const medianSorted = (a: Float64Array, m: number): number =>
+    m % 2 === 1 ? a[(m - 1) >> 1] : 0.5 * (a[m / 2 - 1] + a[m / 2]);
   for (let i = 0; i < n; i++) {
     const x = values[i];
     out[i] = x;
@@ -83,11 +86,11 @@ export function despikeLog(args: {
     const lo = Math.max(0, i - h), hi = Math.min(n - 1, i + h);
     for (let j = lo; j <= hi; j++) {
       const v = values[j];
-      if (!Number.isNaN(v)) buf[m++] = v;
+      if (!Number.isNaN(v)) insert(buf, m++, v);
     }
-    const med = median(buf, m);
-    for (let j = 0; j < m; j++) dev[j] = Math.abs(buf[j] - med);
-    const mad = median(dev, m);
+    const med = medianSorted(buf, m);
+    for (let j = 0; j < m; j++) insert(dev, j, Math.abs(buf[j] - med));
+    const mad = medianSorted(dev, m);
     const r = Math.abs(x - med);
     if (r > Math.max(k * MAD_TO_SIGMA * mad, minDev)) {
       isSpike[i] = 1;

@@ -65,6 +65,14 @@ function arcWeights(f: number, beta: number, sincBeta: number): { c1: number; c2
   };
 }
 
+/** TVD at fraction f of a segment's arc (see {@link arcWeights}). */
+function tvdOnArc(f: number, beta: number, sincBeta: number, L: number, tvd1: number, z1: number, z2: number): number {
+  const sh = sinc((f * beta) / 2);
+  const c1 = (((2 - f) * f) / 2) * sinc(((2 - f) * beta) / 2) * sh / sincBeta;
+  const c2 = ((f * f) / 2) * sh * sh / sincBeta;
+  return tvd1 + L * (c1 * z1 + c2 * z2);
+}
+
 /** Well path at the requested measured depths. All arrays align with the input MDs. */
 export interface SurveyPathAtMd {
   /** TVD below rotary table, ft. */
@@ -145,7 +153,10 @@ export function surveyPathAtMd(args: { survey: readonly SurveyStation[]; mdFt: A
       const L = p.md[k + 1] - p.md[k];
       const f = (md - p.md[k]) / L;
       const beta = p.beta[k], sb = p.sincBeta[k];
-      const { c1, c2 } = arcWeights(f, beta, sb);
+      // arcWeights inlined (hot loop)
+      const sh = sinc((f * beta) / 2);
+      const c1 = (((2 - f) * f) / 2) * sinc(((2 - f) * beta) / 2) * sh / sb;
+      const c2 = ((f * f) / 2) * sh * sh / sb;
       out.tvdFt[j] = p.tvd[k] + L * (c1 * p.td[k] + c2 * p.td[k + 1]);
       out.northFt[j] = p.north[k] + L * (c1 * p.tn[k] + c2 * p.tn[k + 1]);
       out.eastFt[j] = p.east[k] + L * (c1 * p.te[k] + c2 * p.te[k + 1]);
@@ -244,16 +255,13 @@ export function mdAtTvdAlongSurvey(args: { survey: readonly SurveyStation[]; tvd
     const L = p.md[k + 1] - p.md[k];
     const fMax = k === lastSeg ? endFraction : 1;
     const z1 = p.td[k], z2 = p.td[k + 1], b = p.beta[k], sb = p.sincBeta[k];
-    const tvdAt = (f: number): number => {
-      const { c1, c2 } = arcWeights(f, b, sb);
-      return p.tvd[k] + L * (c1 * z1 + c2 * z2);
-    };
+    const tvdK = p.tvd[k];
     // Safeguarded Newton on g(f) = tvd(f) − z over [0, fMax].
     let lo = 0, hi = fMax;
-    let f = (z - p.tvd[k]) / Math.max(tvdAt(fMax) - p.tvd[k], 1e-300) * fMax;
+    let f = (z - tvdK) / Math.max(tvdOnArc(fMax, b, sb, L, tvdK, z1, z2) - tvdK, 1e-300) * fMax;
     if (!(f > lo && f < hi)) f = 0.5 * (lo + hi);
     for (let it = 0; it < 60; it++) {
-      const g = tvdAt(f) - z;
+      const g = tvdOnArc(f, b, sb, L, tvdK, z1, z2) - z;
       if (Math.abs(g) < 1e-9) break;
       if (g > 0) hi = f; else lo = f;
       const dz = L * (((1 - f) * sinc((1 - f) * b) * z1 + f * sinc(f * b) * z2) / sb);

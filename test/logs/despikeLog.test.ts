@@ -51,6 +51,12 @@ describe("despikeLog", () => {
     expect(r2.values).toEqual(s);
   });
 
+  it("reproduces its doc-comment example (hand: window median 104, MAD 2 → 76 > 8.9)", () => {
+    const r = despikeLog({ values: new Float64Array([100, 101, 102, 180, 104, 105, 106]), window: { samples: 5 } });
+    expect(Array.from(r.values)).toEqual([100, 101, 102, 104, 104, 105, 106]);
+    expect(Array.from(r.spikeIndex)).toEqual([3]);
+  });
+
   it("keeps NaN as NaN, ignores NaN neighbours and can replace spikes by NaN", () => {
     const x = new Float64Array([100, 101, NaN, 102, 180, 104, 105, NaN, 106]);
     const r = despikeLog({ values: x, window: { samples: 5 }, replaceWith: "nan" });

@@ -90,6 +90,13 @@ describe("pickShalePoints", () => {
     expect(Array.from(ter.isShale)).toEqual([0, 0, 1]);
   });
 
+  it("reproduces its doc-comment example", () => {
+    const r = pickShalePoints({ tvdFt: new Float64Array([1000, 1001, 1002, 1003]), grApi: new Float64Array([40, 110, 115, 112]),
+      criterion: { kind: "grCutoff", cutoffApi: 90 }, despike: "off" });
+    expect(Array.from(r.points.index)).toEqual([2]); // bed of samples 1..3 → middle sample 2 (hand)
+    expect(r.points.grApi[0]).toBe(112); // median of 110, 115, 112 (hand)
+  });
+
   it("warns when nothing is shale and never calls NaN GR shale", () => {
     const r = pickShalePoints({ tvdFt: new Float64Array([1, 2]), grApi: new Float64Array([NaN, 20]), criterion: { kind: "grCutoff", cutoffApi: 90 } });
     expect(r.points.index.length).toBe(0);
