@@ -4,3 +4,4 @@ export * from "./writeLas.js";
 export * from "./loadWell.js";
 export * from "./csv.js";
 export * from "./tables.js";
+export * from "./trendFile.js";
