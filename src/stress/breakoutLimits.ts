@@ -25,7 +25,7 @@ function checkStrength(args: { ucsPsi: StressSeries; internalFriction: number },
  * @param args.internalFriction μi ≥ 0 (tan of the friction angle), typical 0.6
  * @returns mud pressure at breakout onset, psi, NaN carried through
  * @throws ShalepointError E_RANGE for negative UCS or μi < 0; E_LENGTH on mismatch
- * @example breakoutMudPressure({ shmaxPsi: 6300, shminPsi: 4300, ppPsi: 3080, ucsPsi: 3500, internalFriction: 0.6 }) // [4279.3]
+ * @example breakoutMudPressure({ shmaxPsi: 6300, shminPsi: 4300, ppPsi: 3080, ucsPsi: 3500, internalFriction: 0.6 }) // [4279.2]
  *
  * Reference: Kirsch 1898, Z. VDI 42:797–807 (wall stresses); Mohr–Coulomb criterion in
  * principal stresses as in Jaeger, Cook & Zimmerman 2007, Fundamentals of Rock Mechanics,
