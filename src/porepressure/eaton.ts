@@ -145,7 +145,7 @@ export function eatonRatio(input: { log: EatonLog; observed: ArrayLike<number>; 
  * @throws ShalepointError E_RANGE (exponent ≤ 0), E_LENGTH (length mismatch)
  * @example
  * eatonSonicPorePressure({ overburdenPsi: [66e6 / 6894.757], hydrostaticPsi: [30e6 / 6894.757],
- *   dtUsPerFt: [120], dtTrendUsPerFt: [100] }).ppPsi[0] // 6551.5 psi = 45.17 MPa
+ *   dtUsPerFt: [120], dtTrendUsPerFt: [100] }).ppPsi[0] // 6550.8 psi = 45.17 MPa
  * @see Eaton 1975, SPE-5544 (sonic form, exponent 3.0); Lyons 2001, eq. 4-251
  */
 export function eatonSonicPorePressure(
@@ -167,7 +167,7 @@ export function eatonSonicPorePressure(
  * @throws ShalepointError E_RANGE (exponent ≤ 0), E_LENGTH (length mismatch)
  * @example
  * eatonResistivityPorePressure({ overburdenPsi: [10000], hydrostaticPsi: [4650],
- *   resistivityOhmM: [1.2], resistivityTrendOhmM: [2.0] }).ppPsi[0] // 7101.9 (0.7102 psi/ft)
+ *   resistivityOhmM: [1.2], resistivityTrendOhmM: [2.0] }).ppPsi[0] // 7101.8 (0.7102 psi/ft)
  * @see Eaton 1975, SPE-5544 (resistivity form, exponent 1.2); Lyons 2001, eq. 4-251
  */
 export function eatonResistivityPorePressure(
@@ -189,7 +189,7 @@ export function eatonResistivityPorePressure(
  * @throws ShalepointError E_RANGE (exponent ≤ 0), E_LENGTH (length mismatch)
  * @example
  * eatonDexponentPorePressure({ overburdenPsi: [10400], hydrostaticPsi: [4520],
- *   dcObserved: [1.75], dcTrend: [1.85] }).ppPsi[0] // 4898.7 (0.4899 psi/ft at 10,000 ft)
+ *   dcObserved: [1.75], dcTrend: [1.85] }).ppPsi[0] // 4899.3 (0.4899 psi/ft at 10,000 ft)
  * @see Eaton 1975, SPE-5544 (d-exponent form, exponent 1.2); Lyons 2001, eq. 4-251
  */
 export function eatonDexponentPorePressure(

@@ -89,7 +89,7 @@ export function requireObservations(observations: readonly PressureObservation[]
  * @throws ShalepointError E_LENGTH on length mismatch; E_RANGE for a bad index or weight
  * @example
  * porePressureMisfitTable({ tvdFt: [10000], predictedPsi: [6300],
- *   observations: [{ index: 0, pressurePsi: 6234 }] }).rows[0].differencePpg // 0.1271 ppg (66 psi)
+ *   observations: [{ index: 0, pressurePsi: 6234 }] }).rows[0].differencePpg // 0.12705 ppg (66 psi)
  */
 export function porePressureMisfitTable(input: {
   tvdFt: ArrayLike<number>;
