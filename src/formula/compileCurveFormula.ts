@@ -67,7 +67,7 @@ export interface CompiledCurveFormula {
  * @param args.availableNames curve mnemonics the user may refer to, e.g. ["DT", "RHOB"]
  * @param args.constants extra named constants, e.g. { a: 0.77 }
  * @returns the compiled formula
- * @throws ShalepointError E_FORMULA_SYNTAX (with the column), E_FORMULA_UNSUPPORTED (the
+ * @throws ShalepointError E_FORMULA_SYNTAX (column = the 1-based character position mathjs reports), E_FORMULA_UNSUPPORTED (the
  *   node kind or function), E_FORMULA_UNKNOWN_NAME (naming the symbol and the available names)
  * @example compileCurveFormula({ expression: "2 * DT + k", availableNames: ["DT"], constants: { k: 1 } })
  *   .evaluate({ curves: { DT: [100, NaN] } }).values // [201, NaN]
