@@ -168,7 +168,7 @@ describe("readDrillingEvents, readFormationTops, readDirectionalSurvey", () => {
     expect(records.map((r) => r.event)).toEqual(["connection_gas", "kick", "trip_gas"]);
     expect(records[0].gasUnits).toBe(120);
     // CHECK-VALUES §0: 0.051948 psi/ft per ppg is quoted to 5 significant figures → 1e-5 relative
-    expect(rel(records[1].emwPsiPerFt, 13.9 * 0.051948)).toBeLessThan(1e-5);
+    expect(rel(records[1].emwPsiPerFt!, 13.9 * 0.051948)).toBeLessThan(1e-5);
   });
   it("readDrillingEvents(event-without-reading.csv): row 2 needs EMW or gas units", () => {
     const e = errorOf(() => readDrillingEvents(fixture("event-without-reading.csv")));
