@@ -19,6 +19,10 @@
  * steps, when the step is sampled twice at the same depth); otherwise the truncation error
  * over a depth L is at most L·h²·max|ρ''|·g/12 for sample spacing h — for a 0.5 ft log with
  * ρ'' ≤ 1e-3 g/cc/ft², below 1e-4 psi over 20,000 ft. Rounding stays near 1e-15 relative.
+ *
+ * Files needed to copy this module into a script: stress/overburden.ts,
+ * stress/gardnerDensity.ts, stress/nearMudlineDensity.ts, units/index.ts, errors.ts,
+ * well/types.ts (types only).
  */
 import { PSI_PER_FT_PER_GCC, PSI_PER_FT_PER_PPG, PPG_PER_GCC } from "../units/index.js";
 import { ShalepointError, requireRange, requireSameLength, type Warning } from "../errors.js";
@@ -123,7 +127,7 @@ export interface OverburdenResult {
  * @example
  * // seawater 1.03 g/cc over 3280.84 ft (1000 m), then 2.20 g/cc for 6561.68 ft (2000 m):
  * integrateOverburden({ tvdFt: [0, 3280.84, 9842.52], datums: { rtElevationFt: 0, waterDepthFt: 3280.84, seawaterDensityGcc: 1.03 }, densityGcc: [NaN, 2.2, 2.2] })
- * // svPsi[2] ≈ 7723 psi (53.25 MPa); ranges: waterColumn 0–0 ft, densityLog 3280.84–9842.52 ft
+ * // svPsi[2] ≈ 7723 psi (53.25 MPa); ranges: air at 0 ft, densityLog 3280.84–9842.52 ft
  * Reference: Zoback 2007, Reservoir Geomechanics, ch. 1, eq. 1.6.
  */
 export function integrateOverburden(input: OverburdenInput): OverburdenResult {

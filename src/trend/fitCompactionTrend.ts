@@ -17,6 +17,11 @@
  * R², residual spread and the covariance are those of the linearised fit; the standard
  * errors of the physical parameters follow by the delta method
  * (e.g. se(Δtml) = ln10·Δtml·se(a) for the log10 form).
+ *
+ * Files needed to copy this module into a script: trend/fitCompactionTrend.ts,
+ * trend/fitStraightLine.ts, trend/fitStraightLineHuber.ts, trend/sonicExponentialTrend.ts,
+ * trend/sonicLogLinearTrend.ts, trend/resistivityLogLinearTrend.ts, trend/trendTypes.ts,
+ * errors.ts.
  */
 import { ShalepointError, type Warning } from "../errors.js";
 import { fitStraightLine, type LineCovariance, type StraightLineFit } from "./fitStraightLine.js";
