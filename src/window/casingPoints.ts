@@ -36,8 +36,9 @@ export interface CasingDesign {
  * casing shoe is set at the shallowest depth that held it, and the walk restarts from that
  * shoe with the shoe's own lower bound; the shallowest section reaches the top of the index.
  * Sections share their shoe sample; if the sample just above a shoe cannot hold the shoe's
- * own lower bound, the next section starts one sample above the shoe. Samples with NaN
- * bounds do not constrain. The window should already include the trip and kick margins
+ * own lower bound, the next section starts one sample above the shoe. A sample where no
+ * mud weight fits (lower above upper, or a one-sample dead end) is reported as
+ * `F_NO_MUD_WEIGHT` and left out of the sections; samples with NaN bounds do not constrain. The window should already include the trip and kick margins
  * ({@link mudWeightWindow}); `shoeSafetyMarginPpg` is an extra margin on the upper bound.
  *
  * @param args.tvdFt depth index, ft TVD, increasing
