@@ -76,4 +76,9 @@ describe("compileCurveFormula", () => {
     expect(errOf(() => f.evaluate({ curves: { DT: [1] } })).code).toBe("E_FORMULA_MISSING_CURVE");
     expect(errOf(() => f.evaluate({ curves: { DT: [1], RHOB: [1, 2] } })).code).toBe("E_LENGTH");
   });
+  it("doc example: 2 * DT + k over [100, NaN] → [201, NaN]", () => {
+    const r = compileCurveFormula({ expression: "2 * DT + k", availableNames: ["DT"], constants: { k: 1 } }).evaluate({ curves: { DT: [100, NaN] } });
+    expect(r.values[0]).toBe(201);
+    expect(r.values[1]).toBeNaN();
+  });
 });

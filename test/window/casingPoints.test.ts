@@ -76,4 +76,11 @@ describe("checkCasingPlan", () => {
     expect(code(() => checkCasingPlan({ tvdFt, lowerPsiPerFt, upperPsiPerFt, sections: [{ topTvdFt: 0, bottomTvdFt: 12000, mudWeightPpg: 10 }] }))).toBe("E_DEPTH_OUTSIDE_WELL");
     expect(code(() => checkCasingPlan({ tvdFt, lowerPsiPerFt, upperPsiPerFt, sections: [{ topTvdFt: 5000, bottomTvdFt: 4000, mudWeightPpg: 10 }] }))).toBe("E_RANGE");
   });
+  it("doc example: 10 ppg in a section whose lower bound reaches 0.6 psi/ft (11.55 ppg) → 1.55 ppg short at 2000 ft", () => {
+    const v = checkCasingPlan({ tvdFt: [1000, 2000], lowerPsiPerFt: [0.5, 0.6], upperPsiPerFt: [0.8, 0.8], sections: [{ topTvdFt: 1000, bottomTvdFt: 2000, mudWeightPpg: 10 }] });
+    expect(v).toHaveLength(1);
+    expect([v[0].code, v[0].topFt, v[0].baseFt]).toEqual(["V_BELOW_LOWER", 2000, 2000]);
+    expect(v[0].worstExceedancePpg).toBeCloseTo(0.6 / K - 10, 12); // 11.55 − 10
+    expect(v[0].worstExceedancePpg).toBeCloseTo(1.55, 2);
+  });
 });
