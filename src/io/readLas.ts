@@ -539,6 +539,21 @@ interface ScanResult {
   rows: number;
 }
 
+/** Throw a data-section error at `line` (the raw line is looked up only now). */
+function failAt(
+  text: string,
+  file: string | undefined,
+  line: number,
+  row: number | undefined,
+  code: string,
+  message: string,
+  at: number,
+  extra: ErrorDetails = {},
+): never {
+  const { rawLine } = lineAt(text, at);
+  throw new ShalepointError(code, message, { file, line, rawLine, row, ...extra });
+}
+
 /** Parse the ~A block starting at `start` (first line number `firstLine`). */
 function scanData(
   text: string,
@@ -564,11 +579,6 @@ function scanData(
   let col = 0; // values filled in the current row/record
   let recordLine = firstLine;
 
-  const fail = (code: string, message: string, at: number, extra: ErrorDetails = {}): never => {
-    const { rawLine } = lineAt(text, at);
-    throw new ShalepointError(code, message, { file, line, rawLine, row: row + 1, ...extra });
-  };
-
   while (p < n) {
     const lineStart = p;
     // skip leading blanks
@@ -587,9 +597,8 @@ function scanData(
       continue;
     }
     if (c === 126 /* ~ */) {
-      fail("E_LAS_A_NOT_LAST", "a section follows ~A; ~A must be the last section", lineStart, {
+      failAt(text, file, line, undefined, "E_LAS_A_NOT_LAST", "a section follows ~A; ~A must be the last section", lineStart, {
         hint: "Move the ~A section to the end of the file.",
-        row: undefined,
       });
     }
     // tokens on this line
@@ -666,9 +675,8 @@ function scanData(
         const tok = text.slice(tokStart, p);
         v = DECIMAL_RE.test(tok) ? Number(tok) : NaN;
         if (!Number.isFinite(v)) {
-          fail("E_LAS_NON_NUMERIC", `non-numeric value in ~A`, tokStart, {
+          failAt(text, file, line, row + 1, "E_LAS_NON_NUMERIC", `non-numeric value in ~A`, tokStart, {
             value: tok,
-            column: undefined,
             hint: "Every ~A value must be a decimal number; use the NULL value for missing samples.",
           });
         }
@@ -676,7 +684,7 @@ function scanData(
       if (v === nullValue) v = NaN;
       // ---- place the value ---------------------------------------------------------------
       if (col >= nCurves) {
-        fail("E_LAS_COLUMN_COUNT", `more values than the ${nCurves} curves in ~C`, tokStart, {
+        failAt(text, file, line, row + 1, "E_LAS_COLUMN_COUNT", `more values than the ${nCurves} curves in ~C`, tokStart, {
           value: wrap ? "record overflows" : `${startCol + tokens + 1}+ values`,
           allowed: `${nCurves} values per ${wrap ? "record" : "line"}`,
         });
@@ -688,7 +696,7 @@ function scanData(
     // end of line
     if (wrap) {
       if (startCol === 0 && tokens !== 1) {
-        fail("E_LAS_WRAP_LAYOUT", "a wrapped record must start with the index alone on its line", lineStart, {
+        failAt(text, file, line, row + 1, "E_LAS_WRAP_LAYOUT", "a wrapped record must start with the index alone on its line", lineStart, {
           value: `${tokens} values`,
           hint: "With WRAP YES each depth step starts with a line holding only the index value.",
         });
@@ -700,7 +708,7 @@ function scanData(
       }
     } else {
       if (tokens !== nCurves) {
-        fail("E_LAS_COLUMN_COUNT", `line has ${tokens} values but ~C defines ${nCurves} curves`, lineStart, {
+        failAt(text, file, line, row + 1, "E_LAS_COLUMN_COUNT", `line has ${tokens} values but ~C defines ${nCurves} curves`, lineStart, {
           value: tokens,
           allowed: `${nCurves}`,
           hint: "Check the ~C section against the data columns, or WRAP if records span lines.",
@@ -716,7 +724,6 @@ function scanData(
     }
   }
   if (col !== 0) {
-    line = recordLine;
     throw new ShalepointError("E_LAS_COLUMN_COUNT", `wrapped record has ${col} values but ~C defines ${nCurves} curves`, {
       file,
       line: recordLine,
