@@ -41,5 +41,6 @@ export function depthAxisSpec({
     showgrid: true,
     zeroline: false,
     ticks: "outside",
+    tickformat: ",.0f",
   };
 }

@@ -29,17 +29,19 @@ export function escapeHtml(text: unknown): string {
 
 /**
  * Serialise a value as JSON that is safe to embed inside an HTML `<script>` element:
- * `<`, `>`, `&`, U+2028 and U+2029 are written as `\uXXXX` escapes, so the text can never
- * close the script element (`</script>`) or open a comment (`<!--`), and stays valid
- * JavaScript (ECMA-404 JSON allows `\u` escapes in strings; these characters can only
- * occur inside strings). NaN and ±Infinity become `null`, as JSON.stringify does.
+ * `<`, `>`, `&` and every non-ASCII character (including U+2028 and U+2029) are written as
+ * `\uXXXX` escapes, so the text can never close the script element (`</script>`) or open a
+ * comment (`<!--`), reads the same whatever the page's declared character set (µ, ·, −
+ * survive), and stays valid JavaScript (ECMA-404 JSON allows `\u` escapes in strings; these
+ * characters can only occur inside strings). NaN and ±Infinity become `null`, as
+ * JSON.stringify does.
  *
  * @param value any JSON-serialisable value (typed arrays are written as objects: convert to arrays first)
- * @returns JSON text with no raw `<`, `>`, `&`, U+2028 or U+2029
+ * @returns ASCII-only JSON text with no raw `<`, `>` or `&`
  * @example jsonForScript({ name: "</script>" }) // '{"name":"\\u003c/script\\u003e"}'
  */
 export function jsonForScript(value: unknown): string {
   const json = JSON.stringify(value);
   if (json === undefined) return "null";
-  return json.replace(/[<>&\u2028\u2029]/g, (c) => "\\u" + c.charCodeAt(0).toString(16).padStart(4, "0"));
+  return json.replace(/[<>&\u007f-\uffff]/g, (c) => "\\u" + c.charCodeAt(0).toString(16).padStart(4, "0"));
 }

@@ -34,6 +34,8 @@ export interface AxisSpec {
   zeroline?: boolean;
   showticklabels?: boolean;
   ticks?: "" | "inside" | "outside";
+  /** d3-format string for tick labels, e.g. `",.0f"` for 12,000. */
+  tickformat?: string;
 }
 
 /** A line or point series. */
@@ -60,7 +62,7 @@ export interface TraceSpec {
 
 /** Figure layout. Axis keys follow plotly: `xaxis`, `xaxis2`, …, `yaxis`, `yaxis2`, … */
 export interface LayoutSpec {
-  title: { text: string };
+  title: { text: string; x?: number; xanchor?: "left" | "center" | "right"; y?: number; yanchor?: "top" | "middle" | "bottom" };
   height?: number;
   width?: number;
   showlegend?: boolean;

@@ -116,11 +116,11 @@ export function logTrackFigure({
   const width = (1 - gap * (plans.length - 1)) / plans.length;
   const data: TraceSpec[] = [];
   const layout: LayoutSpec = {
-    title: { text: escapeHtml(title) },
+    title: { text: escapeHtml(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
     height: heightPx,
     showlegend: true,
     legend: { orientation: "h", x: 0, y: -0.03, yanchor: "top" },
-    margin: { l: 80, r: 20, t: 110, b: 60 },
+    margin: { l: 80, r: 20, t: 130, b: 60 },
     hovermode: "closest",
     plot_bgcolor: "#FFFFFF",
     paper_bgcolor: "#FFFFFF",

@@ -131,11 +131,11 @@ export function pressureDepthFigure({
       : { ...base, mode: "lines" as const, line: { color: colour, width: 2, dash: s.dash ?? "solid" } };
   });
   const layout: LayoutSpec = {
-    title: { text: escapeHtml(title) },
+    title: { text: escapeHtml(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
     height: heightPx,
     showlegend: true,
     legend: { orientation: "v", x: 1.02, y: 1, xanchor: "left", yanchor: "top" },
-    margin: { l: 80, r: 20, t: 90, b: 60 },
+    margin: { l: 80, r: 20, t: 110, b: 60 },
     hovermode: "closest",
     plot_bgcolor: "#FFFFFF",
     paper_bgcolor: "#FFFFFF",

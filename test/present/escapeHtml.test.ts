@@ -39,6 +39,14 @@ describe("jsonForScript", () => {
     expect(JSON.parse(json)).toEqual(value); // ECMA-404: \uXXXX escapes are valid JSON (published)
   });
 
+  it("is pure ASCII, so units survive a page without a declared character set", () => {
+    const value = { unit: "DT (µs/ft)", r: "ohm·m", minus: "MD − TVD", emoji: "\u{1F600}" };
+    const json = jsonForScript(value);
+    expect(json).toMatch(/^[\x20-\x7e]*$/);
+    expect(json).toContain("\\u00b5"); // µ MICRO SIGN is U+00B5 (Unicode Standard, published)
+    expect(JSON.parse(json)).toEqual(value);
+  });
+
   it("writes NaN and Infinity as null, like JSON.stringify", () => {
     expect(jsonForScript([1, NaN, Infinity])).toBe("[1,null,null]");
     expect(jsonForScript(undefined)).toBe("null");
