@@ -123,6 +123,10 @@ function findItem(items: LasHeaderItem[], mnemonic: string): LasHeaderItem | und
 
 interface HeaderCtx {
   file?: string;
+  /** Raw text of header lines by 1-based line number. */
+  raw: Map<number, string>;
+  /** Line of each section's `~` line, by section letter. */
+  sectionLine: Map<string, number>;
   policy: LasPolicy;
   warnings: Warning[];
 }
@@ -168,8 +172,11 @@ function parseHeaderLine(raw: string, lineNo: number, ctx: HeaderCtx): LasHeader
 
 function headerNumber(item: LasHeaderItem | undefined, name: string, ctx: HeaderCtx): number {
   if (item === undefined) {
+    const ln = ctx.sectionLine.get("W");
     throw new ShalepointError("E_LAS_MISSING_ITEM", `~W has no ${name} item`, {
       file: ctx.file,
+      line: ln,
+      rawLine: ln === undefined ? undefined : ctx.raw.get(ln),
       param: name,
       hint: `LAS 2.0 requires STRT, STOP, STEP and NULL in ~W; add '${name}.<unit>  <value> : <description>'.`,
     });
@@ -179,6 +186,7 @@ function headerNumber(item: LasHeaderItem | undefined, name: string, ctx: Header
     throw new ShalepointError("E_LAS_HEADER_VALUE", `${name} must be a number`, {
       file: ctx.file,
       line: item.line,
+      rawLine: ctx.raw.get(item.line!),
       param: name,
       value: item.value,
     });
@@ -226,7 +234,7 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
   const file = options.file;
   const policy: LasPolicy = { ...LAS_POLICY_STRICT, ...(options.policy ?? {}) };
   const warnings: Warning[] = [];
-  const ctx: HeaderCtx = { file, policy, warnings };
+  const ctx: HeaderCtx = { file, policy, warnings, raw: new Map(), sectionLine: new Map() };
   const maxSize = options.maxSizeBytes ?? LAS_DEFAULT_MAX_SIZE_BYTES;
 
   if (typeof text !== "string") {
@@ -288,6 +296,7 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
     const raw = text.slice(pos, end).replace(/\r$/, "");
     const next = end + 1;
     lastRaw = raw;
+    ctx.raw.set(lineNo, raw);
     const t = raw.trim();
     pos = next;
     if (t.length === 0 || t.charCodeAt(0) === 35 /* # */) continue;
@@ -323,6 +332,7 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
         });
       }
       seen.add(letter);
+      ctx.sectionLine.set(letter, lineNo);
       current = letter;
       if (letter === "A") {
         dataStart = next;
@@ -351,7 +361,14 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
   // ---- ~V -------------------------------------------------------------------------------
   const vers = findItem(sections.V, "VERS");
   if (vers === undefined) {
-    throw new ShalepointError("E_LAS_MISSING_ITEM", "~V has no VERS item", { file, param: "VERS", hint: "Add 'VERS.  2.0 : LAS version'." });
+    const ln = ctx.sectionLine.get("V");
+    throw new ShalepointError("E_LAS_MISSING_ITEM", "~V has no VERS item", {
+      file,
+      line: ln,
+      rawLine: ln === undefined ? undefined : ctx.raw.get(ln),
+      param: "VERS",
+      hint: "Add 'VERS.  2.0 : LAS version'.",
+    });
   }
   const versNum = DECIMAL_RE.test(vers.value) ? Number(vers.value) : NaN;
   if (versNum !== 2) {
@@ -370,11 +387,24 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
   }
   const wrapItem = findItem(sections.V, "WRAP");
   if (wrapItem === undefined) {
-    throw new ShalepointError("E_LAS_MISSING_ITEM", "~V has no WRAP item", { file, param: "WRAP", hint: "Add 'WRAP.  NO : one line per depth step'." });
+    const ln = ctx.sectionLine.get("V");
+    throw new ShalepointError("E_LAS_MISSING_ITEM", "~V has no WRAP item", {
+      file,
+      line: ln,
+      rawLine: ln === undefined ? undefined : ctx.raw.get(ln),
+      param: "WRAP",
+      hint: "Add 'WRAP.  NO : one line per depth step'.",
+    });
   }
   const wrapText = wrapItem.value.toUpperCase();
   if (wrapText !== "YES" && wrapText !== "NO") {
-    throw new ShalepointError("E_LAS_WRAP", "WRAP must be YES or NO", { file, line: wrapItem.line, value: wrapItem.value, allowed: "YES, NO" });
+    throw new ShalepointError("E_LAS_WRAP", "WRAP must be YES or NO", {
+      file,
+      line: wrapItem.line,
+      rawLine: ctx.raw.get(wrapItem.line!),
+      value: wrapItem.value,
+      allowed: "YES, NO",
+    });
   }
   const wrap = wrapText === "YES";
 
@@ -396,7 +426,13 @@ export function readLas(text: string, options: ReadLasOptions = {}): ReadLasResu
     });
   }
   if (!seen.has("W")) {
-    throw new ShalepointError("E_LAS_MISSING_ITEM", "file has no ~W (well) section", { file, line: aLineNo, param: "~W" });
+    throw new ShalepointError("E_LAS_MISSING_ITEM", "file has no ~W (well) section", {
+      file,
+      line: aLineNo,
+      rawLine: ctx.raw.get(aLineNo),
+      param: "~W",
+      hint: "LAS 2.0 needs ~W with STRT, STOP, STEP and NULL.",
+    });
   }
 
   // ---- ~W numbers ---------------------------------------------------------------------------

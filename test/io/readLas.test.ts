@@ -125,6 +125,8 @@ describe("readLas errors: code and 1-based line per fixture", () => {
     ["wrapped-short-record.las", "E_LAS_COLUMN_COUNT", 22],
     ["missing-colon.las", "E_LAS_HEADER_SYNTAX", 10],
     ["unknown-section.las", "E_LAS_UNKNOWN_SECTION", 16],
+    ["missing-null-item.las", "E_LAS_MISSING_ITEM", 4], // reported at the ~W line
+    ["bad-wrap-value.las", "E_LAS_WRAP", 3],
   ];
   for (const [name, code, line] of cases) {
     it(`readLas(${name}) throws ${code} at line ${line}`, () => {
