@@ -19,3 +19,4 @@ export * from "./drilling/index.js";
 export * from "./synthetic/index.js";
 export * from "./present/index.js";
 export * from "./formula/index.js";
+export * from "./pipeline/index.js";

@@ -7,3 +7,4 @@ export * from "./summarizeLogQc.js";
 export * from "./gammaRayIndex.js";
 export * from "./vshaleFromGammaRay.js";
 export * from "./pickShalePoints.js";
+export * from "./interpolateShaleLine.js";
