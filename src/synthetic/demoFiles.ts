@@ -447,6 +447,14 @@ written in effective stress; shale φ0 0.62, σc 2,800 psi, grain 2.70 g/cc; san
 σc 5,500 psi, grain 2.65 g/cc); bulk density = φ·ρfluid + (1 − φ)·ρgrain. Minimum stress:
 Eaton (1969), Shmin = ν/(1−ν)(Sv − Pp) + Pp, ν 0.42 (Quillon) and 0.40 (Marten).
 
+## Design target for the pore-pressure engine
+Parameters were chosen so that, in the shale of the disequilibrium-compaction section, a
+prediction recovers the truth to 0.3 ppg RMS or better with Eaton sonic (exponent 3, about
+an exponential normal trend fitted in the hydrostatic shale), Eaton resistivity (exponent
+1.2) and Bowers (A 10, B 0.75). In Marten B-1's unloading zone plain Eaton (and Bowers'
+virgin curve) under-predicts by about 0.9 ppg and Bowers' unloading branch recovers the
+truth. The truth files let tests measure exactly that.
+
 ## How the logs are made
 - Shale sonic: Bowers (1995), V = 5000 + 10·σ^0.75 (ft/s, psi); unloading branch with U = 3.5.
 - Shale resistivity: Rn = 0.65·exp(1.1e-4·Zbml) ohm.m, R = Rn·(σv/σn)^(1/1.2) (Eaton 1975
