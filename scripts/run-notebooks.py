@@ -4,7 +4,8 @@
 Usage (from the repository root or anywhere):
     /usr/bin/python3 scripts/run-notebooks.py                  # every notebooks/*.ipynb
     /usr/bin/python3 scripts/run-notebooks.py notebooks/01-load-and-qc.ipynb
-    options: --no-html (skip the HTML export), --timeout SECONDS (per cell, default 120)
+    options: --no-html (skip the HTML export), --timeout SECONDS (per cell, default 120),
+             --from-root (start the kernel in the repository root instead of the notebook's folder)
 
 For each notebook: starts the "tslab" kernel registered by scripts/install-kernel.mjs
 (JUPYTER_PATH is pointed at .jupyter-local/share/jupyter), runs the cells in order with the
@@ -62,7 +63,7 @@ def export_html(nb, path):
         f.write(body)
 
 
-def run_one(path, timeout, html):
+def run_one(path, timeout, html, workdir=None):
     """Run one notebook; returns True when every cell succeeded."""
     name = os.path.basename(path)
     nb = nbformat.read(path, as_version=4)
@@ -72,7 +73,7 @@ def run_one(path, timeout, html):
         timeout=timeout,
         startup_timeout=60,
         allow_errors=False,
-        resources={"metadata": {"path": os.path.dirname(os.path.abspath(path))}},
+        resources={"metadata": {"path": workdir or os.path.dirname(os.path.abspath(path))}},
     )
     start = time.monotonic()
     failed_at = None
@@ -86,7 +87,9 @@ def run_one(path, timeout, html):
                     client.execute_cell(cell, index)
                 except (CellExecutionError, CellTimeoutError, DeadKernelError) as exc:
                     failed_at = index
-                    failure = "{}: {}".format(type(exc).__name__, str(exc).strip().split("\n")[-1][:500])
+                    ename = getattr(exc, "ename", None) or type(exc).__name__
+                    evalue = getattr(exc, "evalue", None) or str(exc).strip().split("\n")[-1]
+                    failure = "{}: {}".format(ename, str(evalue)[:500]) if evalue else ename
                     break
                 # tslab may report a compile error only on stderr with an "ok" reply.
                 if any(o.get("output_type") == "error" for o in cell.get("outputs", [])):
@@ -135,6 +138,7 @@ def main(argv=None):
     ap.add_argument("notebooks", nargs="*", help="notebook files (default: notebooks/*.ipynb)")
     ap.add_argument("--timeout", type=int, default=120, help="seconds per cell (default 120)")
     ap.add_argument("--no-html", action="store_true", help="skip the HTML export")
+    ap.add_argument("--from-root", action="store_true", help="start the kernel in the repository root")
     args = ap.parse_args(argv)
 
     if not os.path.isfile(os.path.join(KERNEL_DIR, "kernels", "tslab", "kernel.json")):
@@ -150,7 +154,7 @@ def main(argv=None):
     )
     passed = failed = 0
     for p in paths:
-        if run_one(os.path.abspath(p), args.timeout, not args.no_html):
+        if run_one(os.path.abspath(p), args.timeout, not args.no_html, ROOT if args.from_root else None):
             passed += 1
         else:
             failed += 1
