@@ -89,7 +89,8 @@ def run_one(path, timeout, html, workdir=None):
                     failed_at = index
                     ename = getattr(exc, "ename", None) or type(exc).__name__
                     evalue = getattr(exc, "evalue", None) or str(exc).strip().split("\n")[-1]
-                    failure = "{}: {}".format(ename, str(evalue)[:500]) if evalue else ename
+                    # tslab sends placeholder names ("<Error>"); the real text is on stderr below.
+                    failure = ename if not evalue or str(evalue).startswith(ename) else "{}: {}".format(ename, str(evalue)[:500])
                     break
                 # tslab may report a compile error only on stderr with an "ok" reply.
                 if any(o.get("output_type") == "error" for o in cell.get("outputs", [])):
