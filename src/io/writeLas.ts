@@ -20,9 +20,40 @@ export interface WriteLasOptions {
 /** Longest line LAS 2.0 allows in wrapped data. */
 const WRAP_WIDTH = 80;
 
+/** 10^0 … 10^6, exact. */
+const P10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
+
+/**
+ * Text that reads back to exactly `x`. Fast path for short decimals (at most 6 decimals and
+ * |x·10^k| < 2^53): with y = x·10^k an integer and y / 10^k === x, the decimal text of y with
+ * the point moved k places converts back to x (one correctly rounded division of exactly
+ * representable doubles — the same fast path the reader uses). Otherwise `String(x)`.
+ */
 function formatNumber(x: number, precision: number | undefined): string {
   if (precision !== undefined) return x.toFixed(precision);
-  return Object.is(x, -0) ? "-0" : String(x);
+  if (Object.is(x, -0)) return "-0";
+  for (let k = 0; k <= 6; k++) {
+    const y = x * P10[k];
+    if (Number.isInteger(y) && Math.abs(y) < 9007199254740992) {
+      if (y / P10[k] !== x) break;
+      if (k === 0) return String(y);
+      const neg = y < 0;
+      let d = String(neg ? -y : y);
+      // x·10^k can land on an integer one k late (51.2345·10^4 = 512344.99999999994), so
+      // drop trailing zeros: "51.23450" and "51.2345" are the same decimal number.
+      let kk = k;
+      let end = d.length;
+      while (kk > 0 && d.charCodeAt(end - 1) === 48) {
+        end--;
+        kk--;
+      }
+      d = d.slice(0, end);
+      if (kk === 0) return (neg ? "-" : "") + d;
+      if (d.length <= kk) d = "0".repeat(kk - d.length + 1) + d;
+      return (neg ? "-" : "") + d.slice(0, d.length - kk) + "." + d.slice(d.length - kk);
+    }
+  }
+  return String(x);
 }
 
 function checkItem(item: LasHeaderItem, section: string): void {

@@ -136,6 +136,33 @@ describe("writeLas round trip", () => {
     );
   });
 
+  it("short decimals are written as String(x) writes them (ECMA-262 Number::toString, published) and read back exactly", () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.integer({ min: -1e9, max: 1e9 }), fc.integer({ min: 0, max: 6 })), { minLength: 1, maxLength: 50 }), (pairs) => {
+        const xs = pairs.map(([i, k]) => i / 10 ** k).filter((x) => x !== -999.25 && !Object.is(x, -0));
+        if (xs.length === 0) return;
+        const las: LasFile = {
+          version: [],
+          well: [],
+          curves: [
+            { mnemonic: "DEPT", unit: "F", value: "", description: "" },
+            { mnemonic: "X", unit: "", value: "", description: "" },
+          ],
+          parameters: [],
+          other: "",
+          data: [Float64Array.from(xs, (_, i) => i), Float64Array.from(xs)],
+          wrap: false,
+          nullValue: -999.25,
+        };
+        const text = writeLas(las);
+        const tokens = text.split("~A\n")[1].trimEnd().split("\n").map((l) => l.trim().split(/\s+/)[1]);
+        expect(tokens).toEqual(xs.map((x) => String(x)));
+        expect(Array.from(readLas(text).las.data[1])).toEqual(xs);
+      }),
+      { numRuns: 200, seed: 11 },
+    );
+  });
+
   it("las-js 3.4.2 reads writeLas output to the same values", async () => {
     const { las } = readLas(fixture("null-9999.las"));
     const text = writeLas(las);
