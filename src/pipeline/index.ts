@@ -1,1 +1,2 @@
 export * from "./predictPorePressure.js";
+export * from "./predictStressWindow.js";
