@@ -1,15 +1,23 @@
 /** Test helpers: a copy of a demo well in a temporary folder, and raw HTTP requests. */
 import { request } from "node:http";
-import { copyFileSync, mkdirSync, mkdtempSync } from "node:fs";
+import { copyFileSync, mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 
 const repo = join(fileURLToPath(new URL(".", import.meta.url)), "..", "..");
 
+const made: string[] = [];
+
+/** Remove every temporary well copy made by {@link copyDemoWell} in this test file. */
+export function removeDemoWellCopies(): void {
+  for (const dir of made.splice(0)) rmSync(dir, { recursive: true, force: true });
+}
+
 /** Copy demo-logs/<well>/<well>.las into <tmp>/<well>/ and return that folder (inside a parent folder). */
 export function copyDemoWell(well = "quillon-a1"): { parent: string; wellDir: string } {
   const parent = mkdtempSync(join(tmpdir(), "shalepoint-picker-"));
+  made.push(parent);
   const wellDir = join(parent, well);
   mkdirSync(wellDir);
   copyFileSync(join(repo, "demo-logs", well, `${well}.las`), join(wellDir, `${well}.las`));

@@ -8,7 +8,7 @@ import { evaluateCompactionTrend } from "../../src/trend/evaluateCompactionTrend
 import { eatonSonicPorePressure } from "../../src/porepressure/eaton.js";
 import type { CompactionTrend } from "../../src/trend/trendTypes.js";
 import type { PickerWellData } from "../../src/picker/pickerModel.js";
-import { copyDemoWell, rawRequest } from "./pickerHttp.js";
+import { copyDemoWell, rawRequest, removeDemoWellCopies } from "./pickerHttp.js";
 
 let picker: TrendPickerHandle;
 let browser: Browser;
@@ -27,6 +27,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
   await picker?.close();
+  removeDemoWellCopies();
 });
 
 /** Eaton sonic pore pressure at one shale point, computed here with the core modules (not the page's code path). */

@@ -7,7 +7,7 @@ import { parseTrendFile, serializeTrendFile } from "../../src/io/trendFile.js";
 import { SAFETY_CAUTION_TEXT } from "../../src/present/caution.js";
 import type { PickerWellData } from "../../src/picker/pickerModel.js";
 import { ShalepointError } from "../../src/errors.js";
-import { copyDemoWell, rawRequest } from "./pickerHttp.js";
+import { copyDemoWell, rawRequest, removeDemoWellCopies } from "./pickerHttp.js";
 
 // Trend through 150 µs/ft at 2000 ft and 100 µs/ft at 10,000 ft below mudline (CHECK-VALUES §2 own case).
 const SLOPE = Math.log10(100 / 150) / 8000;
@@ -30,6 +30,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await picker?.close();
+  removeDemoWellCopies();
 });
 
 const withToken = (path: string): string => `${path}${path.includes("?") ? "&" : "?"}token=${picker.token}`;
