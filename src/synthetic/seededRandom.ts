@@ -18,8 +18,8 @@ export interface SeededRandom {
  * Seeded random source (mulberry32 uniforms, Box–Muller Gaussians).
  *
  * mulberry32: a 32-bit state advanced by the constant 0x6D2B79F5 and mixed by two
- * xor-shift-multiply rounds (public-domain generator by T. Ettinger, 2017, as widely
- * circulated; not a cryptographic generator). Box–Muller: Box, G. E. P. & Muller, M. E.
+ * xor-shift-multiply rounds (public-domain generator usually credited to T. Ettinger, 2017 — from memory; not a
+ * cryptographic generator). Box–Muller: Box, G. E. P. & Muller, M. E.
  * (1958), "A note on the generation of random normal deviates", *Annals of Mathematical
  * Statistics* 29(2):610–611, eq. (1): z = √(−2 ln u1)·cos(2π u2).
  *

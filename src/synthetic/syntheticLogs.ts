@@ -3,10 +3,12 @@
  *
  * Shale sonic — Bowers 1995, "Pore pressure estimation from velocity data: accounting for
  * overpressure mechanisms besides undercompaction", *SPE Drilling & Completion* 10(2):89–95
- * (SPE-27488), eq. 3 (virgin) and eq. 5 (unloading), forms as recalled (from memory):
+ * (SPE-27488), virgin and unloading relations (forms and parameter ranges from memory):
  *   virgin     V = V0 + A·σ^B                                (V ft/s, σ psi, V0 5000 ft/s)
  *   unloading  V = V0 + A·[σmax·(σ/σmax)^(1/U)]^B
- * Shale resistivity — consistent with Eaton 1975 (SPE-5544), resistivity form with exponent
+ * Shale resistivity — consistent with Eaton 1975, "The equation for geopressure prediction
+ * from well logs", SPE Annual Fall Meeting, SPE-5544 (meeting details from memory), the
+ * resistivity form Pp = Sv − (Sv − Ph)(R/Rn)^1.2, with exponent
  * 1.2, about the normal trend Rn = R0·exp(b·Zbml) (Zhang 2011, *Earth-Science Reviews*
  * 108:50–63, exponential resistivity trend): R = Rn·(σv/σn)^(1/1.2), where σn = Sv − Ph and
  * σv is the virgin-curve equivalent of the sonic's effective stress (so resistivity falls with
@@ -39,7 +41,15 @@ export interface DemoWellLogs {
   clean: { dtUsPerFt: Float64Array; rhobGcc: Float64Array; resOhmM: Float64Array };
 }
 
-/** Virgin-equivalent effective stress the sonic sees (Bowers unloading branch inside the zone). */
+/**
+ * Virgin-equivalent effective stress of Bowers' unloading branch: the σ that, put in the
+ * virgin curve V = V0 + A·σ^B, gives the unloading velocity. σe = σmax·(σ/σmax)^(1/U) when
+ * σ < σmax, else σ (Bowers 1995, SPE-27488, unloading relation; form from memory).
+ * @param p truth point; only `sigmaPsi` and `sigmaMaxPsi` (psi) are read
+ * @param u Bowers' unloading parameter U (≥ 1; typical 3–8; 1 = virgin curve)
+ * @returns σe, psi
+ * @example demoSonicStressPsi({ sigmaPsi: 2000, sigmaMaxPsi: 2947 } as DemoTruthPoint, 3.13) // ≈ 2603.7 (→ V 8645 ft/s with A 10, B 0.75)
+ */
 export function demoSonicStressPsi(p: DemoTruthPoint, u: number): number {
   if (p.sigmaMaxPsi > p.sigmaPsi && p.sigmaMaxPsi > 0) {
     return p.sigmaMaxPsi * Math.pow(Math.max(p.sigmaPsi, 0) / p.sigmaMaxPsi, 1 / u);

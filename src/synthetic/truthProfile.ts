@@ -184,7 +184,7 @@ function anchorAt(col: Omit<DemoTruthColumn, "svPsi">, name: keyof DemoAnchors, 
  * @param rock basin rock parameters
  * @param bottomTvdssFt deepest TVDSS needed, ft (typical 15,000)
  * @returns the integrated column; evaluate it with {@link demoTruthAt}
- * @example integrateDemoTruth(QUILLON_DEMO_WELLS[0], QUILLON_ROCK, 15000).anchors.sigmaTopOverpressurePsi // ≈ 2.2e3 psi
+ * @example integrateDemoTruth(QUILLON_DEMO_WELLS[0], QUILLON_ROCK, 15000).anchors.sigmaTopOverpressurePsi // ≈ 1896 psi
  */
 export function integrateDemoTruth(design: DemoWellDesign, rock: DemoRockParameters, bottomTvdssFt: number): DemoTruthColumn {
   const stepFt = 0.5;
@@ -232,7 +232,8 @@ export function integrateDemoTruth(design: DemoWellDesign, rock: DemoRockParamet
  * else from the zone rules at that exact depth.
  * @param col column from {@link integrateDemoTruth}
  * @param tvdssFt depth below sea level, ft (≥ 0)
- * @returns the truth point (psi, g/cc, fraction)
+ * @returns the truth point (psi, g/cc, fraction); above the mudline, the seawater column
+ * @example demoTruthAt(integrateDemoTruth(QUILLON_DEMO_WELLS[0], QUILLON_ROCK, 15000), 6000).ppPsi // 2670 (0.445 × 6000)
  */
 export function demoTruthAt(col: DemoTruthColumn, tvdssFt: number): DemoTruthPoint {
   if (tvdssFt < col.mudlineTvdssFt) return stateAt(col, tvdssFt, NaN);

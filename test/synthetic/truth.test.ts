@@ -213,3 +213,16 @@ describe("QUILLON_DEMO_WELLS", () => {
     expect(B1.pressure.unloading).toBeDefined();
   });
 });
+
+describe("doc examples", () => {
+  it("demoPathAt: end of build at 7,100 ft MD is 5,600 + R·sin 45° TVD", () => {
+    // Circular arc (Sawaryn & Thorogood 2005, published): R = 100/(3·π/180) ft = 1909.86 ft.
+    const r = 100 / ((3 * Math.PI) / 180);
+    expect(Math.abs(demoPathAt(A2ST.trajectory!, 7100).tvdFt - (5600 + r * Math.SQRT1_2))).toBeLessThan(1e-9);
+    expect(Math.abs(demoPathAt(A2ST.trajectory!, 7100).tvdFt - 6950.5)).toBeLessThan(0.05);
+  });
+  it("demoTruthAt: hydrostatic 0.445 psi/ft × 6,000 ft = 2,670 psi in Quillon A-1", () => {
+    const col = integrateDemoTruth(A1, QUILLON_ROCK, 15000);
+    expect(Math.abs(demoTruthAt(col, 6000).ppPsi - 2670)).toBeLessThan(1e-9);
+  });
+});
