@@ -41,6 +41,15 @@ export interface PeltChangePointsInput {
    * divided by the sample step.
    */
   minSegmentSamples?: number;
+  /**
+   * Spacing of admissible change positions, in used samples, integer ≥ 1. Default 1: every
+   * sample, and the result is the exact optimum. With k > 1 the search is exact over change
+   * positions at every k-th sample (segment costs still use every sample), then each change
+   * is refined to the single sample within ±(k − 1) samples: a speed-up for long profiles
+   * with few changes (PELT's pruning does little inside long homogeneous stretches, where
+   * its cost tends to O(n²)); the result is then no longer guaranteed optimal.
+   */
+  candidateStep?: number;
 }
 
 /** One segment found by {@link findChangePointsPelt}; indices refer to the input arrays. */
@@ -73,6 +82,8 @@ export interface PeltChangePointsResult {
   cost: ChangePointCost;
   /** Minimum segment length used, samples. */
   minSegmentSamples: number;
+  /** Spacing of admissible change positions used, samples (1 = exact). */
+  candidateStep: number;
   /** Number of samples used (finite value and, for `"linear"`, finite position). */
   nUsed: number;
   /** Number of samples skipped as missing. */
@@ -104,10 +115,40 @@ function differenceNoiseSigma(y: Float64Array): number {
   return (1.4826 * medianInPlace(d)) / Math.SQRT2;
 }
 
+/** Median by iterative selection (Hoare), O(n) on average; reorders `a`. NaN-free input. */
 function medianInPlace(a: Float64Array): number {
-  a.sort();
-  const m = a.length >> 1;
-  return a.length % 2 === 1 ? a[m] : 0.5 * (a[m - 1] + a[m]);
+  const n = a.length;
+  const select = (k: number): number => {
+    let lo = 0;
+    let hi = n - 1;
+    while (lo < hi) {
+      const pivot = a[(lo + hi) >> 1];
+      let i = lo;
+      let j = hi;
+      while (i <= j) {
+        while (a[i] < pivot) i++;
+        while (a[j] > pivot) j--;
+        if (i <= j) {
+          const tmp = a[i];
+          a[i] = a[j];
+          a[j] = tmp;
+          i++;
+          j--;
+        }
+      }
+      if (k <= j) hi = j;
+      else if (k >= i) lo = i;
+      else return a[k];
+    }
+    return a[k];
+  };
+  const m = n >> 1;
+  if (n % 2 === 1) return select(m);
+  const upper = select(m);
+  // After selecting m, every element left of m is ≤ a[m]: the lower middle is their maximum.
+  let lower = -Infinity;
+  for (let i = 0; i < m; i++) if (a[i] > lower) lower = a[i];
+  return 0.5 * (lower + upper);
 }
 
 /**
@@ -167,6 +208,10 @@ export function findChangePointsPelt(input: PeltChangePointsInput): PeltChangePo
       allowed: `integer ≥ ${minAllowed}`,
       hint: linear ? "A line needs at least 3 samples to have a residual." : undefined,
     });
+  }
+  const step = input.candidateStep ?? 1;
+  if (!Number.isInteger(step) || step < 1) {
+    throw new ShalepointError("E_RANGE", "candidateStep must be an integer ≥ 1", { param: "candidateStep", value: step, allowed: "integer ≥ 1" });
   }
   if (input.penalty !== undefined && !(Number.isFinite(input.penalty) && input.penalty > 0)) {
     throw new ShalepointError("E_RANGE", "penalty must be a finite number > 0", {
@@ -279,52 +324,86 @@ export function findChangePointsPelt(input: PeltChangePointsInput): PeltChangePo
     return rss > 0 ? rss : 0;
   };
 
-  // PELT recursion.
-  const F = new Float64Array(n + 1).fill(Infinity);
-  const last = new Int32Array(n + 1);
+  // PELT recursion over the grid of admissible change positions g_j = j·step (step = 1:
+  // every sample, exact). The last grid point is n itself.
+  const b = step;
+  const J = Math.ceil(n / b);
+  const gpos = (j: number): number => (j >= J ? n : j * b);
+  const mJ = Math.ceil(minSeg / b);
+  const F = new Float64Array(J + 1).fill(Infinity);
+  const last = new Int32Array(J + 1);
   F[0] = -penalty;
-  const cand = new Int32Array(n + 1);
+  const cand = new Int32Array(J + 1);
   let nCand = 0;
   let evals = 0;
-  for (let t = minSeg; t <= n; t++) {
-    const tau0 = t - minSeg;
-    if (tau0 === 0 || tau0 >= minSeg) cand[nCand++] = tau0;
+  let nextToAdd = 0; // grid index of the next candidate to enter the set
+  for (let j = Math.min(mJ, J); j <= J; j++) {
+    const t = gpos(j);
+    // Admit every grid candidate i whose segment (g_i, t] is long enough.
+    while (nextToAdd < j && t - gpos(nextToAdd) >= minSeg) {
+      if (Number.isFinite(F[nextToAdd])) cand[nCand++] = nextToAdd;
+      nextToAdd++;
+    }
     let best = Infinity;
     let arg = 0;
     for (let c = 0; c < nCand; c++) {
-      const tau = cand[c];
-      const v = F[tau] + segCost(tau, t) + penalty;
+      const i = cand[c];
+      const v = F[i] + segCost(gpos(i), t) + penalty;
       if (v < best) {
         best = v;
-        arg = tau;
+        arg = i;
       }
     }
     evals += nCand;
-    F[t] = best;
-    last[t] = arg;
-    // Prune against s = t − minSeg (admissible for every later end point).
-    const s = t - minSeg;
-    if (s >= minSeg) {
-      const Fs = F[s];
+    F[j] = best;
+    last[j] = arg;
+    // Prune against s = j − mJ, admissible for every later end point (including n).
+    const sIdx = j - mJ;
+    if (j < J && sIdx >= 1 && Number.isFinite(F[sIdx])) {
+      const Fs = F[sIdx];
+      const sPos = gpos(sIdx);
       let kept = 0;
       for (let c = 0; c < nCand; c++) {
-        const tau = cand[c];
-        if (tau < s && F[tau] + segCost(tau, s) > Fs) continue;
-        cand[kept++] = tau;
+        const i = cand[c];
+        if (i < sIdx && F[i] + segCost(gpos(i), sPos) > Fs) continue;
+        cand[kept++] = i;
       }
       evals += nCand;
       nCand = kept;
     }
   }
+  if (!Number.isFinite(F[J])) {
+    // Only possible when n < minSeg, rejected above; kept as a guard.
+    throw new ShalepointError("E_TOO_SHORT", "no admissible segmentation", { param: "values", value: n });
+  }
 
   // Back-track.
-  const ends: number[] = [];
-  let t = n;
-  while (t > 0) {
-    ends.push(t);
-    t = last[t];
+  const cps: number[] = [];
+  for (let j = last[J]; j > 0; j = last[j]) cps.unshift(gpos(j));
+  // Local refinement to the sample when the grid is coarser than the samples: each change
+  // moves within ±(step − 1) samples to minimise the cost of its two segments, others fixed.
+  if (b > 1) {
+    for (let pass = 0; pass < 2; pass++) {
+      for (let k = 0; k < cps.length; k++) {
+        const lo = k === 0 ? 0 : cps[k - 1];
+        const hi = k === cps.length - 1 ? n : cps[k + 1];
+        let bestC = cps[k];
+        let bestV = segCost(lo, bestC) + segCost(bestC, hi);
+        const from = Math.max(lo + minSeg, cps[k] - b + 1);
+        const to = Math.min(hi - minSeg, cps[k] + b - 1);
+        for (let c = from; c <= to; c++) {
+          const v = segCost(lo, c) + segCost(c, hi);
+          if (v < bestV) {
+            bestV = v;
+            bestC = c;
+          }
+        }
+        evals += Math.max(0, to - from + 1);
+        cps[k] = bestC;
+      }
+    }
   }
-  ends.reverse();
+  const ends = [...cps, n];
   const segments: PeltSegment[] = [];
   let start = 0;
   let total = 0;
@@ -344,6 +423,7 @@ export function findChangePointsPelt(input: PeltChangePointsInput): PeltChangePo
     noiseSigma,
     cost,
     minSegmentSamples: minSeg,
+    candidateStep: step,
     nUsed: n,
     nSkipped,
     costEvaluations: evals,

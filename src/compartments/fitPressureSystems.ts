@@ -84,7 +84,12 @@ export interface PressureTestReject {
 /** Arguments of {@link fitPressureSystems}. */
 export interface FitPressureSystemsInput {
   tests: readonly PressureTestPoint[];
-  /** A point belongs to a line when within this many psi of it, > 0. Default 10 psi. */
+  /**
+   * A point belongs to a line when within this many psi of it, > 0. Default 5 psi (own
+   * choice: a few times the repeatability of a stabilised formation-pressure test). Near a
+   * contact, points within tolerance/(Δgradient) of it are ambiguous (≈ 14 ft for gas over
+   * brine at 5 psi).
+   */
   tolerancePsi?: number;
   /** Points a line needs, integer ≥ 2. Default 3. */
   minPointsPerLine?: number;
@@ -113,6 +118,41 @@ export interface FitPressureSystemsResult {
 }
 
 const MAX_TESTS = 400;
+
+/**
+ * Bend test: does splitting the points (sorted by depth) into an upper and a lower line
+ * (each ≥ 3 points) fit significantly better than one line? F = ((RSS₁ − RSS₂)/2) /
+ * (RSS₂/(n − 4)) against the upper α quantile of F(2, n − 4), which for 2 numerator degrees
+ * of freedom has the closed form (ν/2)(α^(−2/ν) − 1); α = 0.01 divided by the number of
+ * split positions tried (Bonferroni). Returns the larger part's indices, or null if straight.
+ */
+function straightPart(idx: number[], Z: (i: number) => number, P: (i: number) => number): number[] | null {
+  const n = idx.length;
+  if (n < 6) return null;
+  const sorted = idx.slice().sort((u, v) => Z(u) - Z(v));
+  const rss = (a: number[]): number => {
+    const f = lsq(a.map(Z), a.map(P));
+    return f.rms * f.rms * a.length;
+  };
+  const rss1 = rss(sorted);
+  let best = Infinity;
+  let bestK = -1;
+  for (let k = 3; k <= n - 3; k++) {
+    const r = rss(sorted.slice(0, k)) + rss(sorted.slice(k));
+    if (r < best) {
+      best = r;
+      bestK = k;
+    }
+  }
+  const nu = n - 4;
+  const alpha = 0.01 / (n - 5);
+  const fCrit = (nu / 2) * (Math.pow(alpha, -2 / nu) - 1);
+  const F = best > 0 ? ((rss1 - best) / 2) / (best / nu) : rss1 > 0 ? Infinity : 0;
+  if (!(F > fCrit)) return null;
+  const upper = sorted.slice(0, bestK);
+  const lower = sorted.slice(bestK);
+  return lower.length >= upper.length ? lower : upper;
+}
 
 function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms: number; maxAbs: number } {
   const n = z.length;
@@ -148,9 +188,12 @@ function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms:
  * 1. Points flagged `bad`, missing, or outside [wellTopFt, wellBaseFt] are rejected and
  *    reported (each with a warning).
  * 2. Exact small-set consensus search: every pair of remaining points defines a candidate
- *    line; the one with the most points within `tolerancePsi` (ties: smallest residual sum
- *    of squares) and a gradient inside `gradientRangePsiPerFt` wins; its inliers are refit by
- *    least squares and re-selected until stable; the line is kept if it has at least
+ *    line with a gradient inside `gradientRangePsiPerFt`; the one with the lowest MSAC
+ *    score Σ min(r², tolerance²) (Torr & Zisserman 2000, CVIU 78(1):138–156) and at least
+ *    `minPointsPerLine` points within `tolerancePsi` wins; its inliers are refit by
+ *    least squares and re-selected until stable; if the inliers bend (a split into two lines
+ *    of ≥ 3 points each passes an F test at 1 %, Bonferroni-corrected), only the larger
+ *    straight part is kept and re-grown; the line is kept if it has at least
  *    `minPointsPerLine` points, its points are removed, and the search repeats. This is
  *    exhaustive over pairs (O(k³) per line for k points, so k ≤ 400), and robust to
  *    outliers in the sense of a maximum-consensus fit.
@@ -172,7 +215,7 @@ function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms:
  * // → one line, gradient 0.4650 psi/ft, water; a test at 9500 ft / 6000 psi fits no line.
  */
 export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureSystemsResult {
-  const tol = input.tolerancePsi ?? 10;
+  const tol = input.tolerancePsi ?? 5;
   const minPts = input.minPointsPerLine ?? 3;
   const [gMin, gMax] = input.gradientRangePsiPerFt ?? [0.02, 0.6];
   const maxGap = input.maxContactGapFt ?? 100;
@@ -210,6 +253,7 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
       hint: rejected.length > 0 ? `${rejected.length} test(s) were rejected; see their quality flags and depths.` : undefined,
     });
   }
+  const tol2 = tol * tol;
   const Z = (i: number): number => input.tests[i].tvdFt;
   const P = (i: number): number => input.tests[i].pressurePsi;
 
@@ -219,7 +263,7 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
   for (;;) {
     if (remaining.length < minPts) break;
     let bestIdx: number[] = [];
-    let bestSs = Infinity;
+    let bestScore = Infinity;
     for (let a = 0; a < remaining.length; a++) {
       for (let b = a + 1; b < remaining.length; b++) {
         const ia = remaining[a];
@@ -228,31 +272,46 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
         if (Math.abs(dz) < 1e-6) continue;
         const g = (P(ib) - P(ia)) / dz;
         if (g < gMin || g > gMax) continue;
+        // MSAC score: Σ min(r², tol²) over all remaining points (Torr & Zisserman 2000,
+        // Computer Vision and Image Understanding 78(1):138–156, eq. 7): fewer, tighter
+        // points beat more, looser ones.
         const inl: number[] = [];
-        let ss = 0;
+        let score = 0;
         for (const k of remaining) {
           const r = P(k) - P(ia) - g * (Z(k) - Z(ia));
           if (Math.abs(r) <= tol) {
             inl.push(k);
-            ss += r * r;
+            score += r * r;
+          } else {
+            score += tol2;
           }
         }
-        if (inl.length > bestIdx.length || (inl.length === bestIdx.length && ss < bestSs)) {
+        if (inl.length >= minPts && score < bestScore) {
           bestIdx = inl;
-          bestSs = ss;
+          bestScore = score;
         }
       }
     }
     if (bestIdx.length < minPts) break;
-    // Refit and re-select until stable (at most 10 rounds).
+    // Refit and re-select until stable; when the inliers bend (two fluids, or two systems
+    // caught by one band), keep the larger straight part (at most 10 rounds).
     let idx = bestIdx;
     let fit = lsq(idx.map(Z), idx.map(P));
     for (let round = 0; round < 10; round++) {
+      const part = straightPart(idx, Z, P);
+      if (part !== null) {
+        idx = part;
+        fit = lsq(idx.map(Z), idx.map(P));
+      }
       const next = remaining.filter((k) => Math.abs(P(k) - fit.a - fit.g * Z(k)) <= tol);
-      if (next.length < minPts || (next.length === idx.length && next.every((v, j) => v === idx[j]))) break;
+      if (next.length < minPts) break;
+      const same = next.length === idx.length && next.every((v, j) => v === idx[j]);
+      if (same && part === null) break;
       idx = next;
       fit = lsq(idx.map(Z), idx.map(P));
+      if (same) break;
     }
+    if (idx.length < minPts) break;
     if (fit.g < gMin || fit.g > gMax) break;
     found.push({ idx: idx.slice().sort((u, v) => Z(u) - Z(v)), fit });
     const taken = new Set(idx);

@@ -6,6 +6,9 @@
 import { ShalepointError, requireSameLength, type Warning } from "../errors.js";
 import { findChangePointsPelt, type ChangePointCost } from "./changePointsPelt.js";
 
+/** Grid size above which the automatic candidate step exceeds 1. */
+const AUTO_GRID_POINTS = 2000;
+
 /** Arguments of {@link segmentPressureProfile}. */
 export interface SegmentPressureProfileInput {
   /** TVD below rotary table of each sample, ft, non-decreasing. Typical 0–25,000 ft. */
@@ -39,6 +42,12 @@ export interface SegmentPressureProfileInput {
    * (boundary precision about k × step) for speed on very long profiles.
    */
   decimateEvery?: number;
+  /**
+   * Spacing of admissible change positions, samples (see findChangePointsPelt). Default
+   * `"auto"`: 1 (exact) up to 2000 used samples; above that, about nUsed/2000 (capped at
+   * half the minimum segment) followed by refinement of each boundary to the sample.
+   */
+  candidateStep?: number | "auto";
 }
 
 /** One segment of the excess-pressure profile. */
@@ -77,6 +86,8 @@ export interface SegmentPressureProfileResult {
   /** Minimum segment length used, samples, and the step it was derived from, ft. */
   minSegmentSamples: number;
   stepFt: number;
+  /** Spacing of admissible change positions used, samples (1 = exact optimum). */
+  candidateStep: number;
   nUsed: number;
   nSkipped: number;
   warnings: Warning[];
@@ -207,9 +218,9 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
   if (nMissing > 0) warnings.push({ code: "W_SAMPLES_SKIPPED", message: `${nMissing} sample(s) with missing depth or pressure skipped`, count: nMissing });
   if (nMasked > 0) warnings.push({ code: "W_SAMPLES_MASKED", message: `${nMasked} sample(s) outside useMask not segmented`, count: nMasked });
   // Median step of the used samples.
-  const steps: number[] = [];
-  for (let k = 1; k < used.length; k++) steps.push(tvdFt[used[k]] - tvdFt[used[k - 1]]);
-  steps.sort((a, b) => a - b);
+  const steps = new Float64Array(Math.max(used.length - 1, 0));
+  for (let k = 1; k < used.length; k++) steps[k - 1] = tvdFt[used[k]] - tvdFt[used[k - 1]];
+  steps.sort();
   const stepFt = steps.length > 0 ? steps[steps.length >> 1] : NaN;
   const minLen = cost === "linear" ? 3 : 1;
   const minSeg = stepFt > 0 ? Math.max(minLen, Math.round(minThicknessFt / stepFt) + 1) : minLen;
@@ -227,7 +238,10 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
     zs[k] = tvdFt[used[k]];
     es[k] = excess[used[k]];
   }
-  const pelt = findChangePointsPelt({ values: es, positions: zs, cost, penalty: input.penaltyPsi2, minSegmentSamples: minSeg });
+  const stepOpt = input.candidateStep ?? "auto";
+  const candidateStep =
+    stepOpt === "auto" ? Math.max(1, Math.min(Math.ceil(used.length / AUTO_GRID_POINTS), Math.floor(minSeg / 2))) : stepOpt;
+  const pelt = findChangePointsPelt({ values: es, positions: zs, cost, penalty: input.penaltyPsi2, minSegmentSamples: minSeg, candidateStep });
   for (const w of pelt.warnings) if (w.code !== "W_SAMPLES_SKIPPED") warnings.push(w);
   const segments: PressureProfileSegment[] = [];
   for (const s of pelt.segments) {
@@ -244,6 +258,7 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
     noiseSigmaPsi: pelt.noiseSigma,
     minSegmentSamples: minSeg,
     stepFt,
+    candidateStep: pelt.candidateStep,
     nUsed: used.length,
     nSkipped: nMissing + nMasked + nDecimated,
     warnings,
