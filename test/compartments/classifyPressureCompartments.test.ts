@@ -87,6 +87,34 @@ describe("segmentPressureProfile — designed profile (own case)", () => {
     const ramp = r.segments[1];
     expect(Math.abs(ramp.excessGradientPsiPerFt - 3)).toBeLessThan(0.1); // designed 3 psi/ft
   });
+  it("mean cost: steps between flat compartments (own case: 0 → 1500 psi at 9000 ft, → 600 psi at 10,000 ft) within ±10 ft", () => {
+    // Sharp steps of 900–1500 psi against 30 psi noise: a step is located to a sample or two.
+    const r = rng(7);
+    const n = 2001;
+    const tvdFt = Float64Array.from({ length: n }, (_, i) => 8000 + 2 * i);
+    const hydrostaticPsi = tvdFt.map((z) => 0.465 * z);
+    const ppPsi = tvdFt.map((z, i) => {
+      const g = Math.sqrt(-2 * Math.log(1 - r())) * Math.cos(2 * Math.PI * r());
+      return hydrostaticPsi[i] + (z < 9000 ? 0 : z < 10000 ? 1500 : 600) + 30 * g;
+    });
+    const s = segmentPressureProfile({ tvdFt, ppPsi, hydrostaticPsi, cost: "mean" });
+    expect(s.boundariesFt).toHaveLength(2);
+    expect(Math.abs(s.boundariesFt[0] - 9000)).toBeLessThan(10);
+    expect(Math.abs(s.boundariesFt[1] - 10000)).toBeLessThan(10);
+    const c = classifyPressureCompartments({ tvdFt, ppPsi, hydrostaticPsi, cost: "mean" });
+    expect(c.intervals.map((iv) => iv.label)).toEqual(["hydrostatic", "compartment", "compartment"]);
+    // The 900 psi drop between the two compartments shows as a negative boundary jump.
+    expect(Math.abs(c.boundaries[1].excessJumpPsi + 900)).toBeLessThan(30);
+  });
+  it("missing pressure samples are skipped and counted, with a warning", () => {
+    const w = designedWell();
+    const pp = w.ppPsi.slice();
+    for (let i = 100; i < 150; i++) pp[i] = NaN;
+    const r = segmentPressureProfile({ tvdFt: w.tvdFt, ppPsi: pp, hydrostaticPsi: w.hydrostaticPsi });
+    expect(r.nSkipped).toBe(50);
+    expect(r.nUsed).toBe(w.tvdFt.length - 50);
+    expect(r.warnings.find((x) => x.code === "W_SAMPLES_SKIPPED")?.count).toBe(50);
+  });
   it("does not mutate its inputs", () => {
     const w = designedWell();
     const copy = w.ppPsi.slice();
