@@ -110,13 +110,20 @@ function differenceNoiseSigma(y: Float64Array): number {
   if (n < 3) return 0;
   const d = new Float64Array(n - 1);
   for (let i = 0; i < n - 1; i++) d[i] = y[i + 1] - y[i];
-  const med = medianInPlace(d.slice());
+  const med = medianInPlaceForCompartments(d.slice());
   for (let i = 0; i < d.length; i++) d[i] = Math.abs(d[i] - med);
-  return (1.4826 * medianInPlace(d)) / Math.SQRT2;
+  return (1.4826 * medianInPlaceForCompartments(d)) / Math.SQRT2;
 }
 
-/** Median by iterative selection (Hoare), O(n) on average; reorders `a`. NaN-free input. */
-function medianInPlace(a: Float64Array): number {
+/**
+ * Median of a NaN-free array by iterative selection (Hoare's FIND, Communications of the
+ * ACM 4(7):321–322, 1961), O(n) on average. Reorders `a` (pass a copy to keep the input).
+ * @param a values, any unit; must not contain NaN
+ * @returns the median (mean of the two middle values for an even count); NaN when empty
+ * @example medianInPlaceForCompartments(Float64Array.from([3, 1, 2, 10])) // → 2.5
+ */
+export function medianInPlaceForCompartments(a: Float64Array): number {
+  if (a.length === 0) return NaN;
   const n = a.length;
   const select = (k: number): number => {
     let lo = 0;
