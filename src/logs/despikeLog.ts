@@ -68,34 +68,70 @@ export function despikeLog(args: {
   const out = new Float64Array(n);
   const isSpike = new Uint8Array(n);
   const idx: number[] = [];
-  const buf = new Float64Array(w);
+  // Sorted finite values of the current window, kept up to date as the window slides
+  // (one removal and one insertion per sample instead of re-sorting the whole window).
+  const win = new Float64Array(w);
   const dev = new Float64Array(w);
-  /** Insert v into the sorted prefix a[0..m) (insertion sort: fastest for short windows). */
-  const insert = (a: Float64Array, m: number, v: number): void => {
-    let k = m;
-    while (k > 0 && a[k - 1] > v) { a[k] = a[k - 1]; k--; }
-    a[k] = v;
-  };
-  const medianSorted = (a: Float64Array, m: number): number =>
-    m % 2 === 1 ? a[(m - 1) >> 1] : 0.5 * (a[m / 2 - 1] + a[m / 2]);
+  const c = k * MAD_TO_SIGMA;
+  let m = 0;
+  let winLo = 0;
+  let winHi = -1;
   for (let i = 0; i < n; i++) {
     const x = values[i];
     out[i] = x;
-    if (Number.isNaN(x)) continue;
-    let m = 0;
-    const lo = Math.max(0, i - h), hi = Math.min(n - 1, i + h);
-    for (let j = lo; j <= hi; j++) {
-      const v = values[j];
-      if (!Number.isNaN(v)) insert(buf, m++, v);
+    const lo = i - h > 0 ? i - h : 0;
+    const hi = i + h < n - 1 ? i + h : n - 1;
+    while (winLo < lo) {
+      const v = values[winLo++];
+      if (v === v) {
+        let q = 0;
+        while (win[q] !== v) q++;
+        m--;
+        for (; q < m; q++) win[q] = win[q + 1];
+      }
     }
-    const med = medianSorted(buf, m);
-    for (let j = 0; j < m; j++) insert(dev, j, Math.abs(buf[j] - med));
-    const mad = medianSorted(dev, m);
-    const r = Math.abs(x - med);
-    if (r > Math.max(k * MAD_TO_SIGMA * mad, minDev)) {
-      isSpike[i] = 1;
-      idx.push(i);
-      out[i] = useNan ? NaN : med;
+    while (winHi < hi) {
+      const v = values[++winHi];
+      if (v === v) {
+        let q = m++;
+        while (q > 0 && win[q - 1] > v) { win[q] = win[q - 1]; q--; }
+        win[q] = v;
+      }
+    }
+    if (x !== x) continue;
+    const half = m >> 1;
+    let spike: boolean;
+    if ((m & 1) === 1) {
+      // Odd count: MAD is the middle deviation, so r > c·MAD exactly when at least
+      // half + 1 of the deviations d satisfy c·d < r (c·d is non-decreasing in d).
+      const med = win[half];
+      const r = Math.abs(x - med);
+      spike = false;
+      if (r > minDev) {
+        let below = 0;
+        for (let j = 0; j < m; j++) if (c * Math.abs(win[j] - med) < r) below++;
+        spike = below > half;
+      }
+      if (spike) {
+        isSpike[i] = 1;
+        idx.push(i);
+        out[i] = useNan ? NaN : med;
+      }
+    } else {
+      const med = 0.5 * (win[half - 1] + win[half]);
+      for (let j = 0; j < m; j++) {
+        const d = Math.abs(win[j] - med);
+        let q = j;
+        while (q > 0 && dev[q - 1] > d) { dev[q] = dev[q - 1]; q--; }
+        dev[q] = d;
+      }
+      const mad = 0.5 * (dev[half - 1] + dev[half]);
+      const r = Math.abs(x - med);
+      if (r > Math.max(k * MAD_TO_SIGMA * mad, minDev)) {
+        isSpike[i] = 1;
+        idx.push(i);
+        out[i] = useNan ? NaN : med;
+      }
     }
   }
   return { values: out, isSpike, spikeIndex: Int32Array.from(idx), spikeCount: idx.length };
