@@ -94,8 +94,16 @@ export interface SegmentPressureProfileResult {
 }
 
 /**
- * Least-squares line of `v` against `z` over the listed samples, in centred sums.
- * Exported for sibling modules (classification recomputes merged intervals).
+ * Least-squares line over selected samples (ordinary least squares in centred sums).
+ *
+ * slope = Σ(z − z̄)(v − v̄) / Σ(z − z̄)²; rms = √(Σ residual² / n). Used by the
+ * classification to recompute merged intervals.
+ * @param z abscissa, e.g. TVD ft
+ * @param v ordinate, e.g. excess pressure psi
+ * @param samples indices to use (non-empty, finite values)
+ * @returns n, slope (v unit per z unit; 0 when all z are equal), means, rms residual
+ * @throws nothing; an empty selection returns NaN means
+ * @example compartmentLineFit([0, 1, 2], [1, 3, 5], [0, 1, 2]) // → slope 2, meanV 3, rms 0
  */
 export function compartmentLineFit(
   z: ArrayLike<number>,
@@ -127,7 +135,17 @@ export function compartmentLineFit(
   return { n, slope, meanZ: mz, meanV: mv, rms: Math.sqrt(ss / Math.max(n, 1)) };
 }
 
-/** Statistics of one depth interval of the profile (used by segmentation and classification). */
+/**
+ * Statistics of one depth interval of the profile: mean excess pressure, least-squares
+ * gradients of excess and pore pressure, fitted excess at top and base, rms residual.
+ * @param tvdFt TVD, ft
+ * @param excessPsi pore pressure minus hydrostatic, psi
+ * @param ppPsi pore pressure, psi
+ * @param samples indices of the interval's usable samples, in depth order (non-empty)
+ * @returns a {@link PressureProfileSegment}
+ * @example compartmentIntervalStats([9000, 9100], [1800, 1800], [5985, 6031.5], [0, 1])
+ * // → meanExcessPsi 1800, excessGradientPsiPerFt 0, ppGradientPsiPerFt 0.465
+ */
 export function compartmentIntervalStats(
   tvdFt: ArrayLike<number>,
   excessPsi: ArrayLike<number>,

@@ -12,7 +12,7 @@
  *   a 10380–10820 shale; 10800–12000 compartment at 400 psi; 12000–14000 ramp +0.3 psi/ft.
  */
 import { describe, expect, it } from "vitest";
-import { classifyPressureCompartments, segmentPressureProfile } from "../../src/compartments/index.js";
+import { classifyPressureCompartments, compartmentIntervalStats, compartmentLineFit, segmentPressureProfile } from "../../src/compartments/index.js";
 import { ShalepointError } from "../../src/errors.js";
 
 function rng(seed: number): () => number {
@@ -201,5 +201,20 @@ describe("classifyPressureCompartments — designed profile (own case)", () => {
     const t = classifyPressureCompartments({ tvdFt: w.tvdFt, ppPsi: w.ppPsi, hydrostaticPsi: w.hydrostaticPsi });
     expect(t.seals).toHaveLength(0);
     expect(t.warnings.map((x) => x.code)).toContain("W_NO_SHALE_FLAG");
+  });
+});
+
+describe("compartmentLineFit / compartmentIntervalStats — doc examples (own cases, exact arithmetic)", () => {
+  it("line through (0,1), (1,3), (2,5): slope 2, mean 3, rms 0", () => {
+    const f = compartmentLineFit([0, 1, 2], [1, 3, 5], [0, 1, 2]);
+    expect(f.slope).toBeCloseTo(2, 12);
+    expect(f.meanV).toBeCloseTo(3, 12);
+    expect(f.rms).toBeCloseTo(0, 12);
+  });
+  it("flat 1800 psi excess on a 0.465 psi/ft brine line (CHECK-VALUES §0 common practice) → pp gradient 0.465", () => {
+    const s = compartmentIntervalStats([9000, 9100], [1800, 1800], [5985, 6031.5], [0, 1]);
+    expect(s.meanExcessPsi).toBe(1800);
+    expect(s.excessGradientPsiPerFt).toBe(0);
+    expect(s.ppGradientPsiPerFt).toBeCloseTo(0.465, 12);
   });
 });
