@@ -71,8 +71,9 @@ const FUNCTION_TREND_CHECK_POINTS = 65;
  * Equivalent-depth pore pressure (Foster & Whalen 1966).
  *
  * For each sample at depth Z with observed value x: find Ze in [searchTop, Z] with
- * trend(Ze) = x, by bisection on the monotonic trend (relative depth tolerance 1e-12, at
- * most 200 steps); then σ = Sv(Ze) − Ph(Ze) with Sv, Ph linearly interpolated in the well's
+ * trend(Ze) = x — for a sampled trend, by binary search for the bracketing pair of trend
+ * samples and the exact root of the linear piece between them; for a function trend, by
+ * bisection on the monotonic trend (relative depth tolerance 1e-12, at most 200 steps); then σ = Sv(Ze) − Ph(Ze) with Sv, Ph linearly interpolated in the well's
  * arrays, and Pp = Sv(Z) − σ.
  *
  * When no Ze exists:
@@ -122,6 +123,8 @@ export function equivalentDepthPorePressure(input: {
 
   // The trend as a function of depth.
   let trendAt: (z: number) => number;
+  let sampledZ: ArrayLike<number> | undefined;
+  let sampledV: ArrayLike<number> | undefined;
   if (trend.kind === "sampled") {
     const tz = trend.tvdFt;
     const tv = trend.values;
@@ -135,6 +138,8 @@ export function equivalentDepthPorePressure(input: {
       if (!(Math.sign(tv[k] - tv[k - 1]) === dir && dir !== 0)) notMonotonic("trend.values", tv[k]);
     }
     trendAt = (z) => interpolate(tz, tv, z);
+    sampledZ = tz;
+    sampledV = tv;
   } else {
     trendAt = trend.valueAtTvdFt;
   }
@@ -205,16 +210,36 @@ export function equivalentDepthPorePressure(input: {
       flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
       continue;
     }
-    // Bisection: g(ze) = (trend(ze) − x)·s is ≤ 0 at lo and > 0 at hi.
-    let lo = top;
-    let hi = z;
-    const tol = 1e-12 * Math.max(1, Math.abs(z));
-    for (let k = 0; k < 200 && hi - lo > tol; k++) {
-      const mid = 0.5 * (lo + hi);
-      if ((trendAt(mid) - x) * s <= 0) lo = mid;
-      else hi = mid;
+    // g(ze) = (trend(ze) − x)·s is ≤ 0 at top and > 0 at z.
+    let zE: number;
+    if (sampledZ !== undefined && sampledV !== undefined) {
+      // Sampled trend: binary search for the last trend sample with g ≤ 0, then the root of
+      // the linear piece after it (exact for the piecewise-linear trend), kept in [top, z].
+      let a = 0;
+      let b = sampledZ.length - 1;
+      if ((sampledV[a] - x) * s > 0) b = a;
+      else if ((sampledV[b] - x) * s <= 0) a = b;
+      while (b - a > 1) {
+        const mid = (a + b) >> 1;
+        if ((sampledV[mid] - x) * s <= 0) a = mid;
+        else b = mid;
+      }
+      const dv = sampledV[b] - sampledV[a];
+      zE = a === b || dv === 0 ? sampledZ[a] : sampledZ[a] + ((x - sampledV[a]) / dv) * (sampledZ[b] - sampledZ[a]);
+      if (!(zE >= top)) zE = top;
+      if (!(zE <= z)) zE = z;
+    } else {
+      // Function trend: bisection.
+      let lo = top;
+      let hi = z;
+      const tol = 1e-12 * Math.max(1, Math.abs(z));
+      for (let k = 0; k < 200 && hi - lo > tol; k++) {
+        const mid = 0.5 * (lo + hi);
+        if ((trendAt(mid) - x) * s <= 0) lo = mid;
+        else hi = mid;
+      }
+      zE = 0.5 * (lo + hi);
     }
-    const zE = 0.5 * (lo + hi);
     const svE = interpolate(tvdFt, overburdenPsi, zE);
     const phE = interpolate(tvdFt, hydrostaticPsi, zE);
     if (!(Number.isFinite(svE) && Number.isFinite(phE))) {
