@@ -60,13 +60,12 @@ export interface ShalePick {
   warnings: Warning[];
 }
 
-function medianOf(values: ArrayLike<number>, idx: readonly number[], scratch: number[]): number {
-  scratch.length = 0;
-  for (const i of idx) { const v = values[i]; if (!Number.isNaN(v)) scratch.push(v); }
-  const m = scratch.length;
+function medianOf(values: ArrayLike<number>, members: Int32Array, from: number, to: number, scratch: Float64Array): number {
+  let m = 0;
+  for (let j = from; j < to; j++) { const v = values[members[j]]; if (v === v) scratch[m++] = v; }
   if (m === 0) return NaN;
-  scratch.sort((a, b) => a - b);
-  return m % 2 === 1 ? scratch[(m - 1) >> 1] : 0.5 * (scratch[m / 2 - 1] + scratch[m / 2]);
+  const sorted = scratch.subarray(0, m).sort();
+  return m % 2 === 1 ? sorted[(m - 1) >> 1] : 0.5 * (sorted[m / 2 - 1] + sorted[m / 2]);
 }
 
 /**
@@ -199,44 +198,51 @@ export function pickShalePoints(args: {
     for (let i = 0; i < n; i++) if (!excluded[i] && !Number.isNaN(tvdFt[i]) && inMask(tvdFt[i], "include")) isShale[i] = 1;
   }
 
-  // 6. points
-  const groups: number[][] = [];
+  // 6. points: group members as one flat index list with start offsets (no per-sample arrays).
+  const members = new Int32Array(n);
+  const starts: number[] = [];
+  let count = 0;
   if (decimation.kind === "none") {
-    for (let i = 0; i < n; i++) if (isShale[i]) groups.push([i]);
+    for (let i = 0; i < n; i++) if (isShale[i]) { starts.push(count); members[count++] = i; }
   } else if (decimation.kind === "bedMedian") {
-    let cur: number[] | null = null;
+    let open = false;
     for (let i = 0; i < n; i++) {
-      if (isShale[i]) { (cur ??= []).push(i); } else if (cur) { groups.push(cur); cur = null; }
+      if (isShale[i]) { if (!open) { starts.push(count); open = true; } members[count++] = i; } else open = false;
     }
-    if (cur) groups.push(cur);
   } else {
     let key = NaN;
-    let cur: number[] | null = null;
+    let open = false;
+    const wFt = decimation.windowFt;
     for (let i = 0; i < n; i++) {
       if (!isShale[i]) continue;
-      const k = Math.floor(tvdFt[i] / decimation.windowFt);
-      if (cur && k === key) cur.push(i);
-      else { if (cur) groups.push(cur); cur = [i]; key = k; }
+      const k = Math.floor(tvdFt[i] / wFt);
+      if (!(open && k === key)) { starts.push(count); open = true; key = k; }
+      members[count++] = i;
     }
-    if (cur) groups.push(cur);
   }
-  const m = groups.length;
+  starts.push(count);
+  const m = starts.length - 1;
   const points: ShalePoints = {
     index: new Int32Array(m), tvdFt: new Float64Array(m), topTvdFt: new Float64Array(m), baseTvdFt: new Float64Array(m),
     sampleCount: new Int32Array(m), grApi: new Float64Array(m), values: {},
   };
-  for (const name of Object.keys(curves)) points.values[name] = new Float64Array(m);
-  const scratch: number[] = [];
-  groups.forEach((g, p) => {
-    const rep = g[(g.length - 1) >> 1];
+  const curveEntries = Object.entries(curves);
+  const curveOut = curveEntries.map(([name]) => (points.values[name] = new Float64Array(m)));
+  let widest = 0;
+  for (let p = 0; p < m; p++) widest = Math.max(widest, starts[p + 1] - starts[p]);
+  const scratch = new Float64Array(widest);
+  for (let p = 0; p < m; p++) {
+    const from = starts[p];
+    const to = starts[p + 1];
+    const rep = members[from + ((to - from - 1) >> 1)];
     points.index[p] = rep;
     points.tvdFt[p] = tvdFt[rep];
-    points.topTvdFt[p] = tvdFt[g[0]];
-    points.baseTvdFt[p] = tvdFt[g[g.length - 1]];
-    points.sampleCount[p] = g.length;
-    points.grApi[p] = medianOf(gr, g, scratch);
-    for (const [name, c] of Object.entries(curves)) points.values[name][p] = medianOf(c, g, scratch);
-  });
+    points.topTvdFt[p] = tvdFt[members[from]];
+    points.baseTvdFt[p] = tvdFt[members[to - 1]];
+    points.sampleCount[p] = to - from;
+    points.grApi[p] = medianOf(gr, members, from, to, scratch);
+    for (let c = 0; c < curveEntries.length; c++) curveOut[c][p] = medianOf(curveEntries[c][1], members, from, to, scratch);
+  }
   const warnings: Warning[] = [];
   if (m === 0) warnings.push({ code: "W_NO_SHALE", message: "no sample met the shale criterion; check the cutoff, masks and bed thickness", count: 0 });
   return { isShale, grUsedApi: gr, spikeIndex, points, warnings };
