@@ -179,17 +179,25 @@ export function finishPorePressure(
 /** One counted warning per problem flag kind present in `flags`. */
 export function flagWarnings(flags: Uint8Array, tvdFt: ArrayLike<number> | undefined, methodName: string): Warning[] {
   const out: Warning[] = [];
+  // One pass over the flags: count and first index per bit (most samples carry no flag).
+  const counts = new Int32Array(8);
+  const firsts = new Int32Array(8).fill(-1);
+  for (let i = 0; i < flags.length; i++) {
+    const f = flags[i];
+    if (f === 0) continue;
+    for (let b = 0; b < 8; b++) {
+      if ((f & (1 << b)) !== 0) {
+        if (firsts[b] < 0) firsts[b] = i;
+        counts[b]++;
+      }
+    }
+  }
   for (const [bit, text] of FLAG_TEXT) {
     const code = PP_FLAG_WARNING_CODES[bit];
     if (code === undefined) continue;
-    let count = 0;
-    let first = -1;
-    for (let i = 0; i < flags.length; i++) {
-      if ((flags[i] & bit) !== 0) {
-        if (first < 0) first = i;
-        count++;
-      }
-    }
+    const b = 31 - Math.clz32(bit);
+    const count = counts[b];
+    const first = firsts[b];
     if (count === 0) continue;
     const w: Warning = {
       code,

@@ -124,8 +124,13 @@ export function mudWeightWindow(args: {
   }
   const findings: WindowFinding[] = [];
   const toPpg = (g: number): string => (g / PSI_PER_FT_PER_PPG).toFixed(2);
-  const narrow = Array.from(widthPsiPerFt, (w) => w >= 0 && w < minWidth);
-  const inv = Array.from(widthPsiPerFt, (w) => w < 0);
+  const narrow = new Uint8Array(n);
+  const inv = new Uint8Array(n);
+  for (let i = 0; i < n; i++) {
+    const w = widthPsiPerFt[i];
+    if (w >= 0 && w < minWidth) narrow[i] = 1;
+    else if (w < 0) inv[i] = 1;
+  }
   for (const { first, last } of windowFlagRuns(narrow)) {
     let least = Infinity;
     for (let i = first; i <= last; i++) least = Math.min(least, widthPsiPerFt[i]);

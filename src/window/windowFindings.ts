@@ -19,7 +19,7 @@ export function windowFlagRuns(flags: ArrayLike<boolean | number>): Array<{ firs
   const runs: Array<{ first: number; last: number }> = [];
   let a = -1;
   for (let i = 0; i <= flags.length; i++) {
-    const on = i < flags.length && Boolean(flags[i]);
+    const on = i < flags.length && !!flags[i];
     if (on && a < 0) a = i;
     if (!on && a >= 0) {
       runs.push({ first: a, last: i - 1 });
