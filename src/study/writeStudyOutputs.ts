@@ -144,7 +144,7 @@ function resultLas(w: StudyWellResult, result: StudyResult): LasFile {
 }
 
 function csvNumber(x: number): string {
-  return Number.isFinite(x) ? String(Math.round(x * 1e6) / 1e6) : "";
+  return Number.isFinite(x) ? x.toFixed(4) : "";
 }
 
 function resultCsv(w: StudyWellResult): string {
@@ -273,7 +273,7 @@ function fallbackReportHtml(result: StudyResult): string {
 /**
  * Write every output of a study into `outDir` (created if missing), each atomically.
  *
- * Files: `<well-id>.result.las` and `<well-id>.result.csv` (oilfield units: ft, psi, ppg;
+ * Files: `<well-id>.result.las` and `<well-id>.result.csv` (oilfield units: ft, psi, ppg; 4 decimals;
  * see {@link studyOutputCurves}), `study-summary.json` ({@link studySummary}), `report.html`
  * and `pressure-chart.png` (first well's pressure chart, headless Chromium).
  *
@@ -290,7 +290,7 @@ export async function writeStudyOutputs(result: StudyResult, outDir: string, opt
   for (const w of result.wells) {
     const las = join(outDir, `${w.id}.result.las`);
     const csv = join(outDir, `${w.id}.result.csv`);
-    writeFileAtomic(las, writeLas(resultLas(w, result)));
+    writeFileAtomic(las, writeLas(resultLas(w, result), { precision: 4 }));
     writeFileAtomic(csv, resultCsv(w));
     files.wellFiles.push({ id: w.id, las, csv });
   }
