@@ -131,6 +131,9 @@ export interface ClassifyPressureCompartmentsResult {
   warnings: Warning[];
 }
 
+/** Adjacent ramp (or regression) pieces whose excess gradients differ by less than this factor are joined. */
+const RAMP_MERGE_RATIO = 2;
+
 function labelOf(s: PressureProfileSegment, thr: number, flat: number): { label: PressureIntervalLabel; evidence: string } {
   const change = s.excessBasePsi - s.excessTopPsi;
   const g = s.excessGradientPsiPerFt;
@@ -138,8 +141,11 @@ function labelOf(s: PressureProfileSegment, thr: number, flat: number): { label:
   if (Math.abs(s.excessTopPsi) < thr && Math.abs(s.excessBasePsi) < thr) {
     return { label: "hydrostatic", evidence: `|excess| < ${thr} psi at top and base (${nums})` };
   }
-  if (change >= thr && g > flat) return { label: "ramp", evidence: `excess rises ${change.toFixed(0)} psi downward (${nums})` };
-  if (change <= -thr && g < -flat) return { label: "regression", evidence: `excess falls ${(-change).toFixed(0)} psi downward (${nums})` };
+  // A sloping interval is a ramp (or regression) by its gradient: a long transition is
+  // often cut into short pieces whose own excess change is below T. The small floor on the
+  // change (T/10) keeps a short, noisy tilt flat.
+  if (change >= 0.1 * thr && g > flat) return { label: "ramp", evidence: `excess rises ${change.toFixed(0)} psi downward (${nums})` };
+  if (change <= -0.1 * thr && g < -flat) return { label: "regression", evidence: `excess falls ${(-change).toFixed(0)} psi downward (${nums})` };
   if (s.meanExcessPsi <= -thr) return { label: "underpressured", evidence: `flat and below hydrostatic (${nums})` };
   return { label: "compartment", evidence: `flat excess above ${thr} psi (${nums})` };
 }
@@ -231,12 +237,20 @@ export function classifyPressureCompartments(input: ClassifyPressureCompartments
     const { label } = labelOf(s, thr, flat);
     const prev = merged[merged.length - 1];
     if (prev !== undefined && prev.label === label) {
-      if (label !== "compartment" && label !== "underpressured") {
-        prev.last = s.lastIndex;
-        continue;
-      }
       const ps = statsOver(prev.first, prev.last);
-      if (Math.abs(ps.meanExcessPsi - s.meanExcessPsi) < thr) {
+      let join: boolean;
+      if (label === "ramp" || label === "regression") {
+        // Join pieces of one transition, but keep a steeper ramp (e.g. across a seal)
+        // apart from a gentler one (disequilibrium compaction): gradients within 2×.
+        const g1 = Math.abs(ps.excessGradientPsiPerFt);
+        const g2 = Math.abs(s.excessGradientPsiPerFt);
+        join = Math.max(g1, g2) < RAMP_MERGE_RATIO * Math.min(g1, g2);
+      } else if (label === "hydrostatic") {
+        join = true;
+      } else {
+        join = Math.abs(ps.meanExcessPsi - s.meanExcessPsi) < thr;
+      }
+      if (join) {
         prev.last = s.lastIndex;
         continue;
       }
@@ -285,6 +299,9 @@ export function classifyPressureCompartments(input: ClassifyPressureCompartments
       }
       return null;
     }
+    // Two compartments can share one seal: list it once (as the first compartment found it).
+    const known = seals.find((x) => x.topFt === best!.topFt && x.baseFt === best!.baseFt);
+    if (known !== undefined) return known;
     const seal: PressureSeal = { topFt: best.topFt, baseFt: best.baseFt, thicknessFt: best.baseFt - best.topFt, compartmentId, side, excessChangeAcrossPsi: change };
     seals.push(seal);
     return seal;
