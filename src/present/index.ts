@@ -7,3 +7,4 @@ export * from "./pressureDepthFigure.js";
 export * from "./tableRecords.js";
 export * from "./caution.js";
 export * from "./notebookDisplay.js";
+export * from "./report/index.js";
