@@ -145,6 +145,8 @@ export function wellPressureFigure(input: WellReportInput, heightPx = 800): Figu
     const low: TraceSpec = { type: "scatter", mode: "lines", name: "Pore pressure P10", x: ppg(u.ppP10Psi), y, line: { color: OKABE_ITO.skyBlue, width: 0.5 }, connectgaps: false, showlegend: false };
     const high = { type: "scatter" as const, mode: "lines" as const, name: `Pore pressure P10–P90 (${u.realisations} realisations)`, x: ppg(u.ppP90Psi), y, line: { color: OKABE_ITO.skyBlue, width: 0.5 }, connectgaps: false, fill: "tonextx", fillcolor: BAND_FILL };
     fig.data.unshift(low, high);
+    // A filled trace makes plotly list the legend bottom-up; keep the series order.
+    (fig.layout.legend as Record<string, unknown>).traceorder = "normal";
   }
   return fig;
 }

@@ -5,7 +5,7 @@ import { pathToFileURL } from "node:url";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { renderStudyReport } from "../../../src/present/report/renderStudyReport.js";
 import { wellPressureFigure, strideSampleIndices } from "../../../src/present/report/reportFigures.js";
-import { formatReportNumber, reportNumberCell, rawNumberText } from "../../../src/present/report/formatReportNumber.js";
+import { formatReportNumber, reportNumberCell, reportTextCell, rawNumberText } from "../../../src/present/report/formatReportNumber.js";
 import { plotlyBundleHtml } from "../../../src/present/notebookDisplay.js";
 import { renderChartPng } from "../../../src/present/report/renderChartPng.js";
 import type { StudyReportInput } from "../../../src/present/report/reportTypes.js";
@@ -68,6 +68,11 @@ afterAll(async () => {
 async function columnValues(selector: string, key: string): Promise<number[]> {
   const raw = await page.locator(`${selector} td[data-key="${key}"]`).evaluateAll((cells) => cells.map((c) => c.getAttribute("data-value") ?? ""));
   return raw.map(Number);
+}
+
+/** data-value of the cells a selector finds, as numbers. */
+async function columnValuesAt(selector: string): Promise<number[]> {
+  return (await page.locator(selector).evaluateAll((cells) => cells.map((c) => c.getAttribute("data-value") ?? ""))).map(Number);
 }
 
 describe("renderStudyReport", () => {
@@ -194,6 +199,14 @@ describe("renderStudyReport", () => {
     expect(html).not.toContain("<script>window.__hostileRan");
   });
 
+  it("shows compartments only when given, one row per classified interval", async () => {
+    const k = study.wells[0].compartments!.classification!;
+    expect(await page.locator("#well-1-compartments table.intervals tbody tr").count()).toBe(k.intervals.length);
+    const tops = await columnValuesAt("#well-1-compartments table.intervals tbody tr td:nth-child(3)");
+    expect(tops).toEqual(k.intervals.map((x) => x.topFt));
+    expect(await page.locator("#well-2-compartments").count()).toBe(0);
+  });
+
   it("carries the safety caution at the top and the bottom", async () => {
     for (const id of ["#caution-top", "#caution-bottom"]) {
       const text = (await page.locator(id).textContent()) ?? "";
@@ -238,6 +251,11 @@ describe("formatReportNumber and reportNumberCell", () => {
     expect(formatReportNumber(NaN, 2)).toBe("–");
     expect(formatReportNumber(Infinity, 2)).toBe("–");
     expect(Number(rawNumberText(psi))).toBe(psi);
+    // Doc examples (own cases).
+    expect(reportNumberCell(6234.2857, 0)).toBe('<td class="num" data-value="6234.2857">6,234</td>');
+    expect(reportTextCell("<b>")).toBe("<td>&lt;b&gt;</td>");
+    expect(strideSampleIndices(10, 4)).toEqual([0, 3, 6, 9]);
+    expect(strideSampleIndices(9, 4)).toEqual([0, 3, 6, 8]);
     expect(reportNumberCell(0.1 + 0.2, 2, 'a"b')).toBe('<td class="num" data-key="a&quot;b" data-value="0.30000000000000004">0.30</td>');
   });
 });
