@@ -1,1 +1,12 @@
-export {};
+/**
+ * Uncertainty: seeded Monte Carlo of pore pressure, fracture pressure and the mud-weight
+ * window, with exact type-7 quantiles by selection.
+ *
+ * Results are estimates for trained engineers: calibrate them to measured data and have
+ * them reviewed; local regulations and licensed practice govern.
+ */
+export * from "./xoshiro128Random.js";
+export * from "./drawParameterSamples.js";
+export * from "./drawCorrelatedPairs.js";
+export * from "./quantilesType7.js";
+export * from "./simulatePressureUncertainty.js";

@@ -1,0 +1,584 @@
+/**
+ * Monte Carlo uncertainty of pore pressure, fracture pressure and the mud-weight window
+ * along a well, seeded and reproducible.
+ *
+ * Methods sampled (each keeps its published form; the Monte Carlo only varies inputs):
+ * - Eaton, B.A., 1975, "The equation for geopressure prediction from well logs", SPE-5544
+ *   (meeting details from memory): Pp = Sv − (Sv − Ph)·ratio^n, ratio = Δtn/Δt (sonic) or
+ *   Ro/Rn (resistivity); exponents tabulated in Lyons (ed.) 2001, Standard Handbook of
+ *   Petroleum & Natural Gas Engineering, vol. 1, eq. 4-251.
+ * - Normal compaction trends linearised as in trend/fitCompactionTrend.ts: log10 Δt = a + bZ
+ *   (Hottman & Johnson 1965, JPT 17(6):717–722, SPE-1110); ln R = a + bZ and
+ *   ln(Δt − Δtm) = a + bZ (Zhang 2011, Earth-Science Reviews 108:50–63,
+ *   doi:10.1016/j.earscirev.2011.06.001, forms from memory); (a, b) drawn jointly normal from
+ *   the fit covariance; Δtm stays fixed, as in the fit.
+ * - Bowers, G.L., 1995, SPE Drilling & Completion 10(2):89–95, SPE-27488 (equation numbers
+ *   from memory): V = 10⁶/Δt; virgin σ = ((V − V0)/A)^(1/B) (eq. 1 inverted); unloading
+ *   σ = σmax[((V − V0)/A)^(1/B)/σmax]^U, σmax = ((Vmax − V0)/A)^(1/B) (eqs. 2–3); Pp = Sv − σ.
+ * - Eaton, B.A., 1969, JPT 21(10):1353–1360, SPE-2163: Shmin = ν/(1−ν)(Sv − Pp) + Pp.
+ * - Frictional-faulting lower bound in a normal-faulting regime (Jaeger & Cook, Fundamentals
+ *   of Rock Mechanics; Zoback 2007, Reservoir Geomechanics, Cambridge UP, ch. 4, eq. 4.45 from
+ *   memory): Shmin = (Sv − Pp)/q + Pp, q = [√(μ² + 1) + μ]².
+ * Both fracture forms are Shmin = Pp + k·max(Sv − Pp, 0) with k = ν/(1−ν) or 1/q(μ); the
+ * fracture pressure here is that Shmin (no tensile strength, no hoop-stress term).
+ *
+ * Statistics: P10/P50/P90 are the 10th/50th/90th percentiles of the realisations, so P10 is
+ * the LOW value and P90 the HIGH value (the usual convention of this trade), by the type-7
+ * definition of Hyndman & Fan 1996 (The American Statistician 50(4):361–365), found by
+ * Floyd–Rivest selection inside a bracket predicted from the previous depth (see
+ * createQuantileTracker in quantilesType7.ts) — exact, no sort, usually one pass per depth.
+ *
+ * Loop order: all realisation parameters are drawn once (Float64Arrays of length R); then,
+ * depth by depth, R pore pressures and R fracture pressures go into two scratch buffers
+ * where the statistics are taken. Memory is O(R + depths); no R × depths matrix exists.
+ * For log-linear trends ln(ratio) = a'_r + b'_r·Z − ln(obs) is linear in depth, so each
+ * sample costs one exp (ratio^n = exp(n·ln ratio)); the exponential-to-matrix sonic trend
+ * needs one more exp and a log; Bowers costs one exp per sample (ln(V − V0) once per depth).
+ *
+ * Imports: ../errors.js, siblings of this folder, and the type-only trend shapes.
+ */
+import { ShalepointError, requireSameLength, type Warning } from "../errors.js";
+import type { CompactionTrend } from "../trend/trendTypes.js";
+import { checkParameterDistribution, drawParameterSamples, type ParameterDistribution } from "./drawParameterSamples.js";
+import { drawCorrelatedPairs, type PairCovariance } from "./drawCorrelatedPairs.js";
+import { createQuantileTracker } from "./quantilesType7.js";
+import { createXoshiro128Random, type UniformRandomSource } from "./xoshiro128Random.js";
+
+/** Fewest realisations accepted. */
+export const MIN_MONTE_CARLO_REALISATIONS = 10;
+/** Most realisations accepted (memory and time guard). */
+export const MAX_MONTE_CARLO_REALISATIONS = 10_000_000;
+
+/** Pore-pressure method and its uncertain inputs. */
+export type PorePressureUncertaintyMethod =
+  | {
+      kind: "eaton";
+      /** Eaton exponent n (> 0), e.g. { kind: "normal", mean: 3, std: 0.3 } for sonic. */
+      exponent: ParameterDistribution;
+      /** Normal compaction trend (its kind fixes the log: sonic µs/ft or resistivity ohm.m). */
+      trend: CompactionTrend;
+      /**
+       * Covariance of the linearised (intercept, slope) per trend segment, e.g.
+       * fitCompactionTrend(...).diagnostics.covariance; null or absent = that segment fixed.
+       */
+      trendCovariance?: ReadonlyArray<PairCovariance | null>;
+    }
+  | {
+      kind: "bowers";
+      /** A, (ft/s)/psi^B, > 0; typical 10–20. */
+      a: ParameterDistribution;
+      /** B, in (0, 1]; typical 0.7–0.85. */
+      b: ParameterDistribution;
+      /** V0, ft/s, default 5000 (fixed). */
+      v0FtPerS?: number;
+      /** Unloading below onsetTvdFt where V < Vmax; U ≥ 1 (typical 3–8). */
+      unloading?: { u: ParameterDistribution; onsetTvdFt: number; vmaxFtPerS: number };
+    };
+
+/** Fracture-pressure method and its uncertain input. */
+export type FractureUncertaintyMethod =
+  | { kind: "eaton1969"; /** ν in (0, 0.5), typical 0.25–0.47. */ poissonRatio: ParameterDistribution }
+  | { kind: "frictionalNormal"; /** μ ≥ 0, typical 0.6. */ frictionCoefficient: ParameterDistribution };
+
+/** Inputs of {@link simulatePressureUncertainty}. All arrays share one depth index. */
+export interface PressureUncertaintyInput {
+  /** TVD below rotary table, ft (e.g. 10,000). */
+  tvdFt: ArrayLike<number>;
+  /** Depth below mudline, ft (used by Eaton trends). */
+  bmlFt: ArrayLike<number>;
+  /** Overburden Sv, psi (best estimate). */
+  overburdenPsi: ArrayLike<number>;
+  /** Hydrostatic (normal) pore pressure Ph, psi. */
+  hydrostaticPsi: ArrayLike<number>;
+  /** Observed shale log: slowness µs/ft (sonic trends, Bowers) or resistivity ohm.m. NaN = missing. */
+  observed: ArrayLike<number>;
+  /**
+   * Multiplier on Sv per realisation (bulk density uncertainty), > 0; default fixed 1.
+   * E.g. { kind: "normal", mean: 1, std: 0.02 } for ±2 % (one sigma) overburden.
+   */
+  overburdenFactor?: ParameterDistribution;
+  porePressure: PorePressureUncertaintyMethod;
+  fracture: FractureUncertaintyMethod;
+  /** Planned mud weight as a gradient, psi/ft (EMW), per depth; NaN = none there. */
+  plannedMudWeightPsiPerFt?: ArrayLike<number>;
+  /** Number of realisations R, integer in [10, 10⁷]; typical 1000. */
+  realisations: number;
+  /** Seed, non-negative integer; same seed and inputs give identical output. */
+  seed: number;
+}
+
+/** One drawn input, for a report's parameter table. */
+export interface DrawnParameter {
+  /** e.g. `eatonExponent`, `trendIntercept[0]`, `poissonRatio`. */
+  name: string;
+  /** Unit of the values, e.g. `1`, `psi/ft`, `ln(ohm.m)`. */
+  unit: string;
+  /** One value per realisation (length R). */
+  values: Float64Array;
+}
+
+/** Result of {@link simulatePressureUncertainty}; every array is aligned to the depth index. */
+export interface PressureUncertaintyResult {
+  realisations: number;
+  seed: number;
+  /** Pore pressure percentiles, psi (P10 = low, P90 = high). */
+  ppP10Psi: Float64Array;
+  ppP50Psi: Float64Array;
+  ppP90Psi: Float64Array;
+  /** Mean and standard deviation (divisor R − 1) of pore pressure, psi. */
+  ppMeanPsi: Float64Array;
+  ppStdPsi: Float64Array;
+  /** Fracture pressure (Shmin) percentiles, psi (P10 = low, P90 = high). */
+  fracP10Psi: Float64Array;
+  fracP50Psi: Float64Array;
+  fracP90Psi: Float64Array;
+  /** Cautious window lower bound = pore pressure P90, psi. */
+  windowLowerPsi: Float64Array;
+  /** Cautious window upper bound = fracture pressure P10, psi. */
+  windowUpperPsi: Float64Array;
+  /** Fraction of realisations with planned mud pressure < Pp (underbalance); NaN without a mud weight. */
+  probMudBelowPorePressure: Float64Array;
+  /** Fraction of realisations with planned mud pressure > fracture pressure (losses); NaN without a mud weight. */
+  probMudAboveFracture: Float64Array;
+  /** Drawn inputs, in the order they were drawn. */
+  draws: DrawnParameter[];
+  /** W_MC_MISSING_DEPTHS (depths left NaN), W_MC_WINDOW_CLOSED (P90 Pp ≥ P10 fracture). */
+  warnings: Warning[];
+}
+
+/** Draw one input and check every draw lies in its physical range. */
+function drawChecked(
+  random: UniformRandomSource,
+  dist: ParameterDistribution,
+  count: number,
+  name: string,
+  unit: string,
+  lo: number,
+  hi: number,
+  loOpen: boolean,
+  hiOpen: boolean,
+): Float64Array {
+  const allowed = `${loOpen ? "(" : "["}${lo}, ${hi}${hiOpen ? ")" : "]"}`;
+  const inside = (x: number): boolean => (loOpen ? x > lo : x >= lo) && (hiOpen ? x < hi : x <= hi);
+  const support = checkParameterDistribution(dist, name);
+  // A bounded distribution must fit the physical range whatever the luck of the draw.
+  if (Number.isFinite(support.min) && Number.isFinite(support.max) && !(inside(support.min) && inside(support.max))) {
+    throw new ShalepointError("E_RANGE", `${name}: the distribution reaches outside the physical range`, {
+      param: name, value: support, unit, allowed,
+      hint: "Narrow the bounds of the distribution to the allowed range.",
+    });
+  }
+  const values = drawParameterSamples({ distribution: dist, count, random, param: name });
+  for (let r = 0; r < count; r++) {
+    if (!inside(values[r])) {
+      throw new ShalepointError("E_RANGE", `${name}: realisation ${r} drew a value outside the physical range`, {
+        param: name, value: values[r], unit, allowed, row: r,
+        hint: "Use a truncatedNormal (or uniform/triangular) distribution bounded inside the allowed range.",
+      });
+    }
+  }
+  return values;
+}
+
+function requireFiniteScalar(ok: boolean, param: string, value: unknown, allowed: string, unit?: string): void {
+  if (!ok) throw new ShalepointError("E_RANGE", `${param} is out of range`, { param, value, allowed, unit });
+}
+
+// ---- per-depth kernels (small functions so the engine optimises each on its own) ----------
+
+/** Eaton with a log-linear trend: ln ratio = a_r + b_r·Z + c0 (signs folded in a, b, c0). */
+function fillEatonLogLinearTrend(
+  out: Float64Array, R: number, a: Float64Array, b: Float64Array, n: Float64Array, f: Float64Array,
+  z: number, c0: number, sv: number, ph: number,
+): void {
+  for (let r = 0; r < R; r++) {
+    const lnRatio = a[r] + b[r] * z + c0;
+    const svr = sv * f[r];
+    const pp = svr - (svr - ph) * Math.exp(n[r] * lnRatio);
+    out[r] = pp > svr ? svr : pp; // clipped at overburden, as porepressure/ does
+  }
+}
+
+/** Eaton with the exponential-to-matrix sonic trend: ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt. */
+function fillEatonExponentialTrend(
+  out: Float64Array, R: number, a: Float64Array, b: Float64Array, dtMatrix: number, n: Float64Array, f: Float64Array,
+  z: number, lnObs: number, sv: number, ph: number,
+): void {
+  for (let r = 0; r < R; r++) {
+    const lnRatio = Math.log(dtMatrix + Math.exp(a[r] + b[r] * z)) - lnObs;
+    const svr = sv * f[r];
+    const pp = svr - (svr - ph) * Math.exp(n[r] * lnRatio);
+    out[r] = pp > svr ? svr : pp;
+  }
+}
+
+/** Bowers: Pp = Sv_r − σ_r, virgin or (u given) unloading branch; V ≤ V0 gives σ = 0. */
+function fillBowers(
+  out: Float64Array, R: number, v: number, v0: number, lnA: Float64Array, invB: Float64Array,
+  u: Float64Array | null, lnSigmaMax: Float64Array, f: Float64Array, sv: number,
+): void {
+  if (!(v > v0)) {
+    // At or below V0 the virgin curve gives σ = 0: Pp = Sv (as in bowersPorePressure).
+    for (let r = 0; r < R; r++) out[r] = sv * f[r];
+    return;
+  }
+  const lnVV = Math.log(v - v0);
+  if (u !== null) {
+    for (let r = 0; r < R; r++) {
+      const lnSigmaVirgin = (lnVV - lnA[r]) * invB[r];
+      const lsm = lnSigmaMax[r];
+      out[r] = sv * f[r] - Math.exp(lsm + u[r] * (lnSigmaVirgin - lsm));
+    }
+  } else {
+    for (let r = 0; r < R; r++) out[r] = sv * f[r] - Math.exp((lnVV - lnA[r]) * invB[r]);
+  }
+}
+
+/** Fracture pressure per realisation, shifted moment sums of Pp, and exceedance counts. */
+function fractureAndMoments(
+  pp: Float64Array, fr: Float64Array, R: number, f: Float64Array, k: Float64Array, sv: number, mudPsi: number,
+): { s1: number; s2: number; shift: number; nBelow: number; nAbove: number } {
+  const shift = pp[0];
+  let s1 = 0;
+  let s2 = 0;
+  let nBelow = 0;
+  let nAbove = 0;
+  for (let r = 0; r < R; r++) {
+    const p = pp[r];
+    const eff = sv * f[r] - p;
+    const x = p + k[r] * (eff > 0 ? eff : 0);
+    fr[r] = x;
+    const d = p - shift;
+    s1 += d;
+    s2 += d * d;
+    if (p > mudPsi) nBelow++;
+    if (x < mudPsi) nAbove++;
+  }
+  return { s1, s2, shift, nBelow, nAbove };
+}
+
+/** Per-realisation Eaton trend data of one segment. */
+interface TrendDraws {
+  /** Natural-log intercept and slope, already multiplied by the ratio's sign (log-linear kinds). */
+  a: Float64Array;
+  b: Float64Array;
+  /** Matrix slowness (sonicExponential only), µs/ft. */
+  dtMatrix: number;
+}
+
+/**
+ * Monte Carlo P10/P50/P90 of pore pressure and fracture pressure, the mud-weight window and
+ * the chance that a planned mud weight is under pore pressure or over fracture pressure.
+ *
+ * Per realisation r and depth: Sv_r = f_r·Sv; Eaton: Pp = Sv_r − (Sv_r − Ph)·ratio_r^n_r with
+ * the trend of realisation r; Bowers: Pp = Sv_r − σ_r(V); Pp is clipped at Sv_r (as in
+ * porepressure/porePressureFlags.ts) and never floored at hydrostatic. Fracture:
+ * Shmin = Pp + k_r·max(Sv_r − Pp, 0), k = ν/(1−ν) (Eaton 1969) or 1/q(μ) (frictional).
+ * Probabilities: mud pressure = MW·TVD; P(MW < Pp) = #(Pp_r > mud)/R; P(MW > FG) = #(Shmin_r < mud)/R.
+ * Draw order (fixed, for reproducibility): overburden factor, then Eaton exponent and each
+ * segment's (intercept, slope), or Bowers A, B, U; then ν or μ.
+ * Missing data: a NaN in TVD, Sv, Ph or the log (or a log ≤ 0; for Eaton a NaN or negative
+ * depth below mudline) leaves every output NaN at that depth, counted in W_MC_MISSING_DEPTHS.
+ *
+ * @param input see {@link PressureUncertaintyInput}
+ * @returns {@link PressureUncertaintyResult}: psi arrays, probabilities in [0, 1], draws
+ * @throws ShalepointError E_MC_TOO_FEW_REALISATIONS (R < 10 or not an integer: with fewer
+ *   than 10 realisations P10 and P90 lie on or next to the extreme draws and say nothing
+ *   about the tails); E_RANGE (negative std, ν outside (0, 0.5), μ < 0, n ≤ 0, A ≤ 0,
+ *   B outside (0, 1], U < 1, factor ≤ 0, bad seed, bad trend or covariance); E_LENGTH
+ *   (arrays or trendCovariance of different lengths)
+ * @example
+ * simulatePressureUncertainty({ tvdFt: [10000], bmlFt: [10000], overburdenPsi: [10000], hydrostaticPsi: [4650],
+ *   observed: [1.2], porePressure: { kind: "eaton", exponent: { kind: "fixed", value: 1.2 },
+ *   trend: { kind: "resistivityLogLinear", segments: [{ topBmlFt: 0, params: { r0OhmM: 2 * Math.exp(-1), growthPerFt: 1e-4 }, fittedOn: null }] } },
+ *   fracture: { kind: "eaton1969", poissonRatio: { kind: "fixed", value: 0.25 } }, realisations: 100, seed: 1 }).ppP50Psi
+ * // [7101.8] (Ro/Rn = 0.6, CHECK-VALUES §3: 0.7102 psi/ft)
+ * @see Eaton 1975 SPE-5544; Bowers 1995 SPE-27488; Eaton 1969 SPE-2163; Hyndman & Fan 1996,
+ *   The American Statistician 50(4):361–365
+ */
+export function simulatePressureUncertainty(input: PressureUncertaintyInput): PressureUncertaintyResult {
+  const { tvdFt, bmlFt, overburdenPsi, hydrostaticPsi, observed, realisations: R, seed } = input;
+  const mw = input.plannedMudWeightPsiPerFt;
+
+  if (!(Number.isInteger(R) && R >= MIN_MONTE_CARLO_REALISATIONS && R <= MAX_MONTE_CARLO_REALISATIONS)) {
+    throw new ShalepointError("E_MC_TOO_FEW_REALISATIONS", "the number of realisations must be an integer of at least 10", {
+      param: "realisations", value: R, allowed: `integer in [${MIN_MONTE_CARLO_REALISATIONS}, ${MAX_MONTE_CARLO_REALISATIONS}]`,
+      hint: "With fewer than 10 realisations P10 and P90 sit on or next to the extreme draws; use 1000 or more for a report.",
+    });
+  }
+  const nDepth = tvdFt.length;
+  requireSameLength(tvdFt, bmlFt, "tvdFt", "bmlFt");
+  requireSameLength(tvdFt, overburdenPsi, "tvdFt", "overburdenPsi");
+  requireSameLength(tvdFt, hydrostaticPsi, "tvdFt", "hydrostaticPsi");
+  requireSameLength(tvdFt, observed, "tvdFt", "observed");
+  if (mw !== undefined) requireSameLength(tvdFt, mw, "tvdFt", "plannedMudWeightPsiPerFt");
+
+  const random = createXoshiro128Random(seed);
+  const draws: DrawnParameter[] = [];
+  const factor = drawChecked(random, input.overburdenFactor ?? { kind: "fixed", value: 1 }, R, "overburdenFactor", "1", 0, Infinity, true, true);
+  draws.push({ name: "overburdenFactor", unit: "1", values: factor });
+
+  // ---- pore-pressure parameters --------------------------------------------------------
+  const pm = input.porePressure;
+  let exponent: Float64Array = new Float64Array(0);
+  let trendKind: CompactionTrend["kind"] = "sonicLogLinear";
+  const segTops: number[] = [];
+  const segDraws: TrendDraws[] = [];
+  let lnA: Float64Array = new Float64Array(0);
+  let invB: Float64Array = new Float64Array(0);
+  let uArr: Float64Array = new Float64Array(0);
+  let lnSigmaMax: Float64Array = new Float64Array(0);
+  let v0 = 5000;
+  let unloadOnsetFt = Infinity;
+  let vmax = NaN;
+  if (pm.kind === "eaton") {
+    exponent = drawChecked(random, pm.exponent, R, "eatonExponent", "1", 0, Infinity, true, true);
+    draws.push({ name: "eatonExponent", unit: "1", values: exponent });
+    const trend = pm.trend;
+    trendKind = trend.kind;
+    const segs = trend.segments as ReadonlyArray<{ topBmlFt: number; params: unknown }>;
+    if (segs.length === 0) {
+      throw new ShalepointError("E_TREND_SEGMENTS", "a trend needs at least one segment", { param: "porePressure.trend.segments" });
+    }
+    if (pm.trendCovariance !== undefined && pm.trendCovariance.length !== segs.length) {
+      throw new ShalepointError("E_LENGTH", "trendCovariance needs one entry (or null) per trend segment", {
+        param: "porePressure.trendCovariance", value: `${pm.trendCovariance.length} vs ${segs.length}`,
+      });
+    }
+    // Ratio orientation (Eaton 1975): sonic Δtn/Δt → ln ratio = ln Δtn − ln Δt (sign +1);
+    // resistivity Ro/Rn → ln ratio = ln Ro − ln Rn (sign −1 on the trend).
+    const sign = trend.kind === "resistivityLogLinear" ? -1 : 1;
+    segs.forEach((seg, k) => {
+      const where = `porePressure.trend.segments[${k}]`;
+      requireFiniteScalar(Number.isFinite(seg.topBmlFt) && (k === 0 || seg.topBmlFt > segs[k - 1].topBmlFt), `${where}.topBmlFt`, seg.topBmlFt, "finite, increasing with depth", "ft");
+      // Linearised intercept a0 and slope b0, and the factor from that log base to ln.
+      let a0: number;
+      let b0: number;
+      let toLn = 1;
+      let dtMatrix = NaN;
+      let unitA = "";
+      if (trend.kind === "sonicLogLinear") {
+        const p = trend.segments[k].params;
+        requireFiniteScalar(p.dtMudlineUsPerFt > 0 && Number.isFinite(p.dtMudlineUsPerFt), `${where}.params.dtMudlineUsPerFt`, p.dtMudlineUsPerFt, "> 0", "us/ft");
+        requireFiniteScalar(Number.isFinite(p.log10SlopePerFt), `${where}.params.log10SlopePerFt`, p.log10SlopePerFt, "finite", "1/ft");
+        a0 = Math.log10(p.dtMudlineUsPerFt);
+        b0 = p.log10SlopePerFt;
+        toLn = Math.LN10;
+        unitA = "log10(us/ft)";
+      } else if (trend.kind === "resistivityLogLinear") {
+        const p = trend.segments[k].params;
+        requireFiniteScalar(p.r0OhmM > 0 && Number.isFinite(p.r0OhmM), `${where}.params.r0OhmM`, p.r0OhmM, "> 0", "ohm.m");
+        requireFiniteScalar(Number.isFinite(p.growthPerFt), `${where}.params.growthPerFt`, p.growthPerFt, "finite", "1/ft");
+        a0 = Math.log(p.r0OhmM);
+        b0 = p.growthPerFt;
+        unitA = "ln(ohm.m)";
+      } else if (trend.kind === "sonicExponential") {
+        const p = trend.segments[k].params;
+        requireFiniteScalar(p.dtMatrixUsPerFt > 0 && Number.isFinite(p.dtMatrixUsPerFt), `${where}.params.dtMatrixUsPerFt`, p.dtMatrixUsPerFt, "> 0", "us/ft");
+        requireFiniteScalar(p.dtMudlineUsPerFt > p.dtMatrixUsPerFt && Number.isFinite(p.dtMudlineUsPerFt), `${where}.params.dtMudlineUsPerFt`, p.dtMudlineUsPerFt, "> dtMatrixUsPerFt", "us/ft");
+        requireFiniteScalar(p.decayPerFt >= 0 && Number.isFinite(p.decayPerFt), `${where}.params.decayPerFt`, p.decayPerFt, ">= 0", "1/ft");
+        a0 = Math.log(p.dtMudlineUsPerFt - p.dtMatrixUsPerFt);
+        b0 = -p.decayPerFt;
+        dtMatrix = p.dtMatrixUsPerFt;
+        unitA = "ln(us/ft)";
+      } else {
+        throw new ShalepointError("E_TREND_PARAMS", "unknown trend kind", {
+          param: "porePressure.trend.kind", value: (trend as { kind: unknown }).kind,
+          allowed: "sonicExponential, sonicLogLinear, resistivityLogLinear",
+        });
+      }
+      const cov = pm.trendCovariance?.[k] ?? null;
+      let aDraw: Float64Array;
+      let bDraw: Float64Array;
+      if (cov === null) {
+        aDraw = new Float64Array(R).fill(a0);
+        bDraw = new Float64Array(R).fill(b0);
+      } else {
+        const pair = drawCorrelatedPairs({ meanX: a0, meanY: b0, covariance: cov, count: R, random, param: `porePressure.trendCovariance[${k}]` });
+        aDraw = pair.x;
+        bDraw = pair.y;
+      }
+      draws.push({ name: `trendIntercept[${k}]`, unit: unitA, values: aDraw });
+      draws.push({ name: `trendSlope[${k}]`, unit: `${unitA.split("(")[0]} per ft`, values: bDraw });
+      const a = new Float64Array(R);
+      const b = new Float64Array(R);
+      const s = trend.kind === "sonicExponential" ? 1 : sign * toLn;
+      for (let r = 0; r < R; r++) {
+        a[r] = s * aDraw[r];
+        b[r] = s * bDraw[r];
+      }
+      segTops.push(seg.topBmlFt);
+      segDraws.push({ a, b, dtMatrix });
+    });
+  } else if (pm.kind === "bowers") {
+    v0 = pm.v0FtPerS ?? 5000;
+    requireFiniteScalar(Number.isFinite(v0) && v0 > 0, "porePressure.v0FtPerS", v0, "> 0", "ft/s");
+    const aArr = drawChecked(random, pm.a, R, "bowersA", "(ft/s)/psi^B", 0, Infinity, true, true);
+    const bArr = drawChecked(random, pm.b, R, "bowersB", "1", 0, 1, true, false);
+    draws.push({ name: "bowersA", unit: "(ft/s)/psi^B", values: aArr }, { name: "bowersB", unit: "1", values: bArr });
+    lnA = new Float64Array(R);
+    invB = new Float64Array(R);
+    for (let r = 0; r < R; r++) {
+      lnA[r] = Math.log(aArr[r]);
+      invB[r] = 1 / bArr[r];
+    }
+    if (pm.unloading !== undefined) {
+      const un = pm.unloading;
+      requireFiniteScalar(Number.isFinite(un.onsetTvdFt), "porePressure.unloading.onsetTvdFt", un.onsetTvdFt, "finite", "ft");
+      requireFiniteScalar(Number.isFinite(un.vmaxFtPerS) && un.vmaxFtPerS > v0, "porePressure.unloading.vmaxFtPerS", un.vmaxFtPerS, `> V0 (${v0})`, "ft/s");
+      uArr = drawChecked(random, un.u, R, "bowersU", "1", 1, Infinity, false, true);
+      draws.push({ name: "bowersU", unit: "1", values: uArr });
+      unloadOnsetFt = un.onsetTvdFt;
+      vmax = un.vmaxFtPerS;
+      lnSigmaMax = new Float64Array(R);
+      const lnVmax = Math.log(vmax - v0);
+      for (let r = 0; r < R; r++) lnSigmaMax[r] = (lnVmax - lnA[r]) * invB[r];
+    }
+  } else {
+    throw new ShalepointError("E_RANGE", "unknown pore-pressure method", {
+      param: "porePressure.kind", value: (pm as { kind: unknown }).kind, allowed: "eaton | bowers",
+    });
+  }
+
+  // ---- fracture parameter → k_r ----------------------------------------------------------
+  const fm = input.fracture;
+  const kFrac = new Float64Array(R);
+  if (fm.kind === "eaton1969") {
+    const nu = drawChecked(random, fm.poissonRatio, R, "poissonRatio", "1", 0, 0.5, true, true);
+    draws.push({ name: "poissonRatio", unit: "1", values: nu });
+    for (let r = 0; r < R; r++) kFrac[r] = nu[r] / (1 - nu[r]);
+  } else if (fm.kind === "frictionalNormal") {
+    const mu = drawChecked(random, fm.frictionCoefficient, R, "frictionCoefficient", "1", 0, Infinity, false, true);
+    draws.push({ name: "frictionCoefficient", unit: "1", values: mu });
+    for (let r = 0; r < R; r++) {
+      const q = (Math.sqrt(mu[r] * mu[r] + 1) + mu[r]) ** 2;
+      kFrac[r] = 1 / q;
+    }
+  } else {
+    throw new ShalepointError("E_RANGE", "unknown fracture method", {
+      param: "fracture.kind", value: (fm as { kind: unknown }).kind, allowed: "eaton1969 | frictionalNormal",
+    });
+  }
+
+  // ---- depth loop ---------------------------------------------------------------------------
+  const mk = (): Float64Array => new Float64Array(nDepth);
+  const ppQ = new Float64Array(3 * nDepth); // interleaved P10, P50, P90 while looping
+  const frQ = new Float64Array(3 * nDepth);
+  const ppMeanPsi = mk();
+  const ppStdPsi = mk();
+  const probMudBelowPorePressure = mk();
+  const probMudAboveFracture = mk();
+  const ppBuf = new Float64Array(R);
+  const frBuf = new Float64Array(R);
+  const probs = [0.1, 0.5, 0.9];
+  const ppTracker = createQuantileTracker({ count: R, probabilities: probs });
+  const frTracker = createQuantileTracker({ count: R, probabilities: probs });
+  let nMissing = 0;
+  let firstMissing = -1;
+  const isEaton = pm.kind === "eaton";
+  const isResistivity = trendKind === "resistivityLogLinear";
+  const isExpTrend = trendKind === "sonicExponential";
+  const hasUnloading = uArr.length > 0;
+
+  for (let i = 0; i < nDepth; i++) {
+    const sv = overburdenPsi[i];
+    const ph = hydrostaticPsi[i];
+    const obs = observed[i];
+    const z = bmlFt[i];
+    let ok = Number.isFinite(sv) && Number.isFinite(ph) && Number.isFinite(tvdFt[i]) && Number.isFinite(obs) && obs > 0;
+    if (ok && isEaton) ok = z >= 0 && Number.isFinite(z);
+    if (ok) {
+      if (isEaton) {
+        let k = 0;
+        while (k + 1 < segTops.length && z >= segTops[k + 1]) k++;
+        const seg = segDraws[k];
+        if (isExpTrend) fillEatonExponentialTrend(ppBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph);
+        else fillEatonLogLinearTrend(ppBuf, R, seg.a, seg.b, exponent, factor, z, isResistivity ? Math.log(obs) : -Math.log(obs), sv, ph);
+      } else {
+        const v = 1e6 / obs; // Bowers works in velocity, ft/s (slowness µs/ft → 10⁶/Δt)
+        const unload = hasUnloading && tvdFt[i] >= unloadOnsetFt && v < vmax;
+        fillBowers(ppBuf, R, v, v0, lnA, invB, unload ? uArr : null, lnSigmaMax, factor, sv);
+      }
+      // Fracture pressure, moments (shifted sums about the first value) and exceedance counts.
+      const mudPsi = mw === undefined ? NaN : mw[i] * tvdFt[i];
+      const m = fractureAndMoments(ppBuf, frBuf, R, factor, kFrac, sv, mudPsi);
+      const s1 = m.s1;
+      const s2 = m.s2;
+      const shift = m.shift;
+      const nBelow = m.nBelow;
+      const nAbove = m.nAbove;
+      if (Number.isFinite(s2)) {
+        const mean = s1 / R;
+        ppMeanPsi[i] = shift + mean;
+        ppStdPsi[i] = Math.sqrt(Math.max(0, (s2 - R * mean * mean) / (R - 1)));
+        probMudBelowPorePressure[i] = Number.isFinite(mudPsi) ? nBelow / R : NaN;
+        probMudAboveFracture[i] = Number.isFinite(mudPsi) ? nAbove / R : NaN;
+        ppTracker.quantiles(ppBuf, ppQ, 3 * i);
+        frTracker.quantiles(frBuf, frQ, 3 * i);
+        continue;
+      }
+    }
+    // Missing input (or a non-finite realisation): NaN everywhere at this depth.
+    nMissing++;
+    if (firstMissing < 0) firstMissing = i;
+    ppMeanPsi[i] = NaN;
+    ppStdPsi[i] = NaN;
+    probMudBelowPorePressure[i] = NaN;
+    probMudAboveFracture[i] = NaN;
+    ppQ[3 * i] = ppQ[3 * i + 1] = ppQ[3 * i + 2] = NaN;
+    frQ[3 * i] = frQ[3 * i + 1] = frQ[3 * i + 2] = NaN;
+  }
+
+  const split = (q: Float64Array, m: number): Float64Array => {
+    const out = mk();
+    for (let i = 0; i < nDepth; i++) out[i] = q[3 * i + m];
+    return out;
+  };
+  const ppP10Psi = split(ppQ, 0);
+  const ppP50Psi = split(ppQ, 1);
+  const ppP90Psi = split(ppQ, 2);
+  const fracP10Psi = split(frQ, 0);
+  const fracP50Psi = split(frQ, 1);
+  const fracP90Psi = split(frQ, 2);
+
+  const warnings: Warning[] = [];
+  if (nMissing > 0) {
+    warnings.push({
+      code: "W_MC_MISSING_DEPTHS", message: "depths with missing or invalid inputs were left NaN",
+      count: nMissing, index: firstMissing, depthFt: tvdFt[firstMissing],
+    });
+  }
+  let nClosed = 0;
+  let firstClosed = -1;
+  for (let i = 0; i < nDepth; i++) {
+    if (ppP90Psi[i] >= fracP10Psi[i]) {
+      nClosed++;
+      if (firstClosed < 0) firstClosed = i;
+    }
+  }
+  if (nClosed > 0) {
+    warnings.push({
+      code: "W_MC_WINDOW_CLOSED", message: "the high (P90) pore pressure reaches the low (P10) fracture pressure: no cautious window",
+      count: nClosed, index: firstClosed, depthFt: tvdFt[firstClosed],
+    });
+  }
+
+  return {
+    realisations: R,
+    seed,
+    ppP10Psi,
+    ppP50Psi,
+    ppP90Psi,
+    ppMeanPsi,
+    ppStdPsi,
+    fracP10Psi,
+    fracP50Psi,
+    fracP90Psi,
+    windowLowerPsi: Float64Array.from(ppP90Psi),
+    windowUpperPsi: Float64Array.from(fracP10Psi),
+    probMudBelowPorePressure,
+    probMudAboveFracture,
+    draws,
+    warnings,
+  };
+}
