@@ -1,2 +1,4 @@
 export * from "./predictPorePressure.js";
 export * from "./predictStressWindow.js";
+export * from "./incrementalPorePressure.js";
+export * from "./predictCompartments.js";

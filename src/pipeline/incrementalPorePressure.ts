@@ -1,0 +1,572 @@
+/**
+ * While-drilling update of a pore-pressure prediction: append new depth samples (a new LAS
+ * chunk) and refresh every curve from the shallowest sample the new data can change,
+ * without re-running the whole well. The result equals {@link predictPorePressure} on the
+ * concatenated well bit for bit (the same arithmetic runs in the same order; the test in
+ * test/pipeline/incrementalPorePressure.test.ts proves it on a demo well).
+ *
+ * Where each step restarts (h = 5, the half-width of the 11-sample despike window):
+ * - despiked curves: from n_old − h (the windows that now see new samples);
+ * - bad-hole flag, hydrostatic: pointwise, new samples only;
+ * - overburden: from the start of the trailing run of filled (interpolated / extended)
+ *   densities or n_old − h, whichever is shallower, continuing the compensated running sum
+ *   kept in the state;
+ * - shale flag and points: points in 20-ft windows that lie wholly above
+ *   (depth of sample n_old − 1 − h) − minimum bed thickness − one step are kept; the rest are
+ *   re-picked on a tail slice that starts far enough up for the despike window and the
+ *   bed-thickness rule;
+ * - shale lines: from the last kept point with a value;
+ * - trends: refitted on all points unless given (frozen); when the fitted parameters are
+ *   unchanged only new samples are evaluated, otherwise every sample;
+ * - Eaton / Bowers: pointwise from the shallowest changed input (every sample when a trend
+ *   moved); equivalent depth searches the whole trend, so it is re-run on the whole well.
+ * Calibration refits (fitEatonExponents, fitBowers) are global and are not supported here.
+ *
+ * Results are estimates for trained engineers: calibrate them to measured data and have
+ * them reviewed; local regulations and licensed practice govern.
+ */
+import { ShalepointError, type Warning } from "../errors.js";
+import type { Curve, Well } from "../well/types.js";
+import { depthReferenceArrays } from "../well/depthReferenceArrays.js";
+import { mudlineTvdFt } from "../well/depthReference.js";
+import { despikeLog } from "../logs/despikeLog.js";
+import { flagBadHole } from "../logs/flagBadHole.js";
+import { pickShalePoints, type ShalePick, type ShalePoints } from "../logs/pickShalePoints.js";
+import { interpolateShaleLine } from "../logs/interpolateShaleLine.js";
+import { OverburdenSource, OVERBURDEN_SOURCE_NAMES, type OverburdenResult, type OverburdenSourceRange } from "../stress/overburden.js";
+import { gardnerDensityFromSlowness } from "../stress/gardnerDensity.js";
+import { hydrostaticPressure } from "../stress/hydrostatic.js";
+import { PSI_PER_FT_PER_GCC, PSI_PER_FT_PER_PPG } from "../units/index.js";
+import { fitCompactionTrendSegments } from "../trend/fitCompactionTrend.js";
+import { evaluateCompactionTrend } from "../trend/evaluateCompactionTrend.js";
+import { eatonPorePressure, eatonRatio, EATON_RESISTIVITY_EXPONENT, EATON_SONIC_EXPONENT } from "../porepressure/eaton.js";
+import { bowersPorePressure, velocityAtDepth } from "../porepressure/bowersPorePressure.js";
+import { equivalentDepthPorePressure } from "../porepressure/equivalentDepth.js";
+import { velocityFromSlownessLog } from "../porepressure/velocityFromSlowness.js";
+import { flagWarnings, type PorePressureResult } from "../porepressure/porePressureFlags.js";
+import {
+  predictPorePressure,
+  type PorePressurePrediction,
+  type PorePressurePredictionOptions,
+  type TrendChoice,
+  type TrendOutcome,
+} from "./predictPorePressure.js";
+
+/** Half-width of the 11-sample despike window used by {@link predictPorePressure}. */
+const DESPIKE_HALF = 5;
+
+/** A while-drilling prediction: the well so far, its prediction and the running sums. */
+export interface IncrementalPorePressureState {
+  well: Well;
+  options: PorePressurePredictionOptions;
+  prediction: PorePressurePrediction;
+  /** Compensated running sum of the overburden integral (sum and compensation), psi. */
+  overburdenRun: { anchorIndex: number; sumPsi: Float64Array; compPsi: Float64Array };
+  /** First sample index the last update recomputed (0 for a fresh start). */
+  recomputedFromIndex: number;
+}
+
+/** New depth samples below the current end of the well, in internal units. */
+export interface DepthSampleChunk {
+  /** MD below RT, ft, increasing and deeper than the well's last sample. */
+  mdFt: ArrayLike<number>;
+  /** TVD below RT, ft, non-decreasing and at or below the well's last sample. */
+  tvdFt: ArrayLike<number>;
+  /** Values by curve role (the well's roles); a role missing here is appended as NaN. */
+  curves: Readonly<Record<string, ArrayLike<number>>>;
+}
+
+function unsupported(what: string): ShalepointError {
+  return new ShalepointError("E_INCREMENTAL_UNSUPPORTED", `the while-drilling update does not support ${what}`, {
+    param: what,
+    hint: "Run predictPorePressure on the whole well for calibration refits, or leave them out while drilling.",
+  });
+}
+
+function checkOptions(options: PorePressurePredictionOptions): void {
+  if (options.calibration?.fitEatonExponents) throw unsupported("calibration.fitEatonExponents");
+  if (options.calibration?.fitBowers) throw unsupported("calibration.fitBowers");
+  if (options.despike === false) return;
+}
+
+/** Replay the overburden's compensated running sum from its anchor (same arithmetic). */
+function overburdenRunFrom(ob: OverburdenResult, tvdFt: Float64Array): IncrementalPorePressureState["overburdenRun"] {
+  const n = tvdFt.length;
+  let anchor = n;
+  for (let i = 0; i < n; i++) {
+    const s = ob.source[i];
+    if (s !== OverburdenSource.air && s !== OverburdenSource.waterColumn && s !== OverburdenSource.nearMudlinePowerLaw) {
+      anchor = i;
+      break;
+    }
+  }
+  const sumPsi = new Float64Array(n);
+  const compPsi = new Float64Array(n);
+  if (anchor < n) {
+    let sum = ob.svPsi[anchor];
+    let comp = 0;
+    sumPsi[anchor] = sum;
+    const rho = ob.densityUsedGcc;
+    for (let i = anchor + 1; i < n; i++) {
+      const term = 0.5 * (rho[i - 1] + rho[i]) * PSI_PER_FT_PER_GCC * (tvdFt[i] - tvdFt[i - 1]);
+      const t = sum + term;
+      comp += Math.abs(sum) >= Math.abs(term) ? sum - t + term : term - t + sum;
+      sum = t;
+      sumPsi[i] = sum;
+      compPsi[i] = comp;
+    }
+  }
+  return { anchorIndex: anchor, sumPsi, compPsi };
+}
+
+/**
+ * Start a while-drilling prediction: run {@link predictPorePressure} once and keep what the
+ * updates need.
+ *
+ * @param well the well drilled so far (internal units, curves keyed by role)
+ * @param options as for {@link predictPorePressure}, without calibration refits
+ * @returns {@link IncrementalPorePressureState}
+ * @throws ShalepointError E_INCREMENTAL_UNSUPPORTED for calibration refits; every error of
+ *   {@link predictPorePressure}
+ * @example startWhileDrilling(wellToDate, options).prediction.ppPsi
+ */
+export function startWhileDrilling(well: Well, options: PorePressurePredictionOptions): IncrementalPorePressureState {
+  checkOptions(options);
+  const prediction = predictPorePressure(well, options);
+  return { well, options, prediction, overburdenRun: overburdenRunFrom(prediction.overburden, prediction.tvdFt), recomputedFromIndex: 0 };
+}
+
+function concat(a: ArrayLike<number>, b: ArrayLike<number>): Float64Array {
+  const out = new Float64Array(a.length + b.length);
+  out.set(a as Float64Array);
+  for (let i = 0; i < b.length; i++) out[a.length + i] = b[i];
+  return out;
+}
+
+function grow(old: Float64Array, n: number): Float64Array {
+  const out = new Float64Array(n);
+  out.set(old.subarray(0, Math.min(old.length, n)));
+  return out;
+}
+
+function spliceDespiked(oldClean: Float64Array | undefined, raw: Float64Array | undefined, from: number, despike: boolean): Float64Array | undefined {
+  if (raw === undefined || oldClean === undefined) return undefined;
+  const n = raw.length;
+  const out = grow(oldClean, n);
+  if (!despike) {
+    out.set(raw.subarray(from), from);
+    return out;
+  }
+  const s = Math.max(0, from - DESPIKE_HALF);
+  const tail = despikeLog({ values: raw.subarray(s), window: { samples: 11 }, threshold: 3 }).values;
+  out.set(tail.subarray(from - s), from);
+  return out;
+}
+
+function appendWell(well: Well, chunk: DepthSampleChunk): Well {
+  const m = chunk.tvdFt.length;
+  const n0 = well.tvdFt.length;
+  if (chunk.mdFt.length !== m) {
+    throw new ShalepointError("E_LENGTH", "chunk mdFt and tvdFt must have the same length", { param: "chunk.mdFt", value: `${chunk.mdFt.length} vs ${m}` });
+  }
+  const lastTvd = n0 > 0 ? well.tvdFt[n0 - 1] : -Infinity;
+  const lastMd = n0 > 0 ? well.mdFt[n0 - 1] : -Infinity;
+  for (let i = 0; i < m; i++) {
+    const prevTvd = i === 0 ? lastTvd : chunk.tvdFt[i - 1];
+    const prevMd = i === 0 ? lastMd : chunk.mdFt[i - 1];
+    if (!(Number.isFinite(chunk.tvdFt[i]) && chunk.tvdFt[i] >= prevTvd && chunk.mdFt[i] > prevMd)) {
+      throw new ShalepointError("E_DEPTH_ORDER", "appended samples must lie below the current end of the well, in depth order", {
+        param: "chunk.tvdFt",
+        row: i,
+        value: chunk.tvdFt[i],
+        unit: "ft",
+        allowed: `TVD ≥ ${prevTvd} and MD > ${prevMd}`,
+        hint: "Append only samples drilled since the last update; re-run the whole well to revise older depths.",
+      });
+    }
+  }
+  const curves: Record<string, Curve> = {};
+  for (const [role, curve] of Object.entries(well.curves)) {
+    const add = chunk.curves[role];
+    if (add !== undefined && add.length !== m) {
+      throw new ShalepointError("E_LENGTH", `chunk curve ${role} must have one value per sample`, { param: `chunk.curves.${role}`, value: `${add.length} vs ${m}` });
+    }
+    curves[role] = { ...curve, values: concat(curve.values, add ?? new Float64Array(m).fill(NaN)) };
+  }
+  return { ...well, mdFt: concat(well.mdFt, chunk.mdFt), tvdFt: concat(well.tvdFt, chunk.tvdFt), curves };
+}
+
+function windowKey(z: number, wFt: number): number {
+  return Math.floor(z / wFt);
+}
+
+/** Shale pick on the new well: keep old points wholly above the safe depth, re-pick the rest. */
+function updateShalePick(
+  old: ShalePick,
+  tvdFt: Float64Array,
+  grRaw: Float64Array,
+  pointCurves: Record<string, Float64Array>,
+  options: PorePressurePredictionOptions,
+  nOld: number,
+): { pick: ShalePick; cutKeyDepthFt: number } {
+  const n = tvdFt.length;
+  const wFt = options.shale.pointSpacingFt ?? 20;
+  const minBed = options.shale.minBedThicknessFt ?? 10;
+  let maxStep = 0;
+  for (let i = Math.max(1, nOld - 4 * DESPIKE_HALF); i < n; i++) maxStep = Math.max(maxStep, tvdFt[i] - tvdFt[i - 1]);
+  // Old samples at or above this depth keep their shale flag (despike window and bed rule unchanged).
+  const lastSure = Math.max(0, nOld - 1 - DESPIKE_HALF);
+  const safeFt = tvdFt[lastSure] - minBed - maxStep;
+  const cutKey = Math.floor(safeFt / wFt);
+  const cutFt = cutKey * wFt;
+  // Tail slice start: the bed rule needs beds reaching the cut to be seen over minBed + a step,
+  // and the GR despike needs DESPIKE_HALF samples of lead.
+  let t = 0;
+  while (t < n && tvdFt[t] < cutFt - minBed - 2 * maxStep) t++;
+  const s = Math.max(0, t - DESPIKE_HALF - 1);
+  const sliceCurves: Record<string, Float64Array> = {};
+  for (const [k, v] of Object.entries(pointCurves)) sliceCurves[k] = v.subarray(s);
+  const tail = pickShalePoints({
+    tvdFt: tvdFt.subarray(s),
+    grApi: grRaw.subarray(s),
+    criterion: options.shale.criterion,
+    minBedThicknessFt: minBed,
+    masks: options.shale.masks,
+    decimation: { kind: "window", windowFt: wFt },
+    curves: sliceCurves,
+  });
+  const keepOld = countWhile(old.points.tvdFt.length, (p) => windowKey(old.points.tvdFt[p], wFt) < cutKey);
+  const tp = tail.points;
+  let firstNew = 0;
+  while (firstNew < tp.tvdFt.length && windowKey(tp.tvdFt[firstNew], wFt) < cutKey) firstNew++;
+  const nNew = tp.tvdFt.length - firstNew;
+  const m = keepOld + nNew;
+  const op = old.points;
+  const points: ShalePoints = {
+    index: new Int32Array(m),
+    tvdFt: new Float64Array(m),
+    topTvdFt: new Float64Array(m),
+    baseTvdFt: new Float64Array(m),
+    sampleCount: new Int32Array(m),
+    grApi: new Float64Array(m),
+    values: {},
+  };
+  const take = <T extends Int32Array | Float64Array>(dst: T, a: T, b: T, offset = 0): void => {
+    dst.set(a.subarray(0, keepOld));
+    for (let p = 0; p < nNew; p++) dst[keepOld + p] = b[firstNew + p] + offset;
+  };
+  take(points.index, op.index, tp.index, s);
+  take(points.tvdFt, op.tvdFt, tp.tvdFt);
+  take(points.topTvdFt, op.topTvdFt, tp.topTvdFt);
+  take(points.baseTvdFt, op.baseTvdFt, tp.baseTvdFt);
+  take(points.sampleCount, op.sampleCount, tp.sampleCount);
+  take(points.grApi, op.grApi, tp.grApi);
+  for (const k of Object.keys(pointCurves)) {
+    points.values[k] = new Float64Array(m);
+    take(points.values[k], op.values[k], tp.values[k]);
+  }
+  // Per-sample arrays: sample i ≥ t (slice index ≥ t − s) is exact in the tail pick.
+  const isShale = new Uint8Array(n);
+  isShale.set(old.isShale.subarray(0, t));
+  isShale.set(tail.isShale.subarray(t - s), t);
+  const grUsedApi = new Float64Array(n);
+  grUsedApi.set(old.grUsedApi.subarray(0, t));
+  grUsedApi.set(tail.grUsedApi.subarray(t - s), t);
+  const spikes: number[] = [];
+  for (const i of old.spikeIndex) if (i < t) spikes.push(i);
+  for (const i of tail.spikeIndex) if (i + s >= t) spikes.push(i + s);
+  const warnings: Warning[] = [];
+  if (m === 0) warnings.push({ code: "W_NO_SHALE", message: "no sample met the shale criterion; check the cutoff, masks and bed thickness", count: 0 });
+  return { pick: { isShale, grUsedApi, spikeIndex: Int32Array.from(spikes), points, warnings }, cutKeyDepthFt: cutFt };
+}
+
+function countWhile(n: number, ok: (p: number) => boolean): number {
+  let p = 0;
+  while (p < n && ok(p)) p++;
+  return p;
+}
+
+/** Shale line refreshed from the last kept point with a value: returns the line and its restart index. */
+function updateShaleLine(
+  oldLine: Float64Array,
+  points: ShalePoints,
+  values: Float64Array,
+  keptBelowFt: number,
+  tvdFt: Float64Array,
+  maxGapFt: number,
+): { line: Float64Array; from: number } {
+  let zKeep = -Infinity;
+  for (let p = 0; p < points.tvdFt.length && points.tvdFt[p] < keptBelowFt; p++) if (Number.isFinite(values[p])) zKeep = points.tvdFt[p];
+  let from = 0;
+  while (from < tvdFt.length && !(tvdFt[from] > zKeep)) from++;
+  const line = grow(oldLine, tvdFt.length);
+  const tail = interpolateShaleLine({ pointTvdFt: points.tvdFt, pointValues: values, tvdFt: tvdFt.subarray(from), maxGapFt });
+  line.set(tail, from);
+  return { line, from };
+}
+
+function sameTrend(a: TrendOutcome | undefined, b: { trend: unknown }): boolean {
+  return a !== undefined && JSON.stringify(a.trend) === JSON.stringify(b.trend);
+}
+
+function updateTrend(
+  old: TrendOutcome | undefined,
+  choice: TrendChoice | undefined,
+  pick: ShalePick,
+  pointValues: Float64Array | undefined,
+  mudlineFt: number,
+  bmlFt: Float64Array,
+  nOld: number,
+): { outcome?: TrendOutcome; from: number } {
+  if (choice === undefined || old === undefined || pointValues === undefined) return { outcome: undefined, from: bmlFt.length };
+  let fitted: { trend: TrendOutcome["trend"]; diagnostics: TrendOutcome["diagnostics"] };
+  if (choice.use === "given") {
+    fitted = { trend: choice.trend, diagnostics: [] };
+  } else {
+    const pointBml = new Float64Array(pick.points.tvdFt.length);
+    for (let k = 0; k < pointBml.length; k++) pointBml[k] = pick.points.tvdFt[k] - mudlineFt;
+    fitted = fitCompactionTrendSegments({ kind: choice.kind, bmlFt: pointBml, values: pointValues, method: choice.method ?? "huber", segments: choice.segments });
+  }
+  if (sameTrend(old, fitted)) {
+    const values = grow(old.values, bmlFt.length);
+    values.set(evaluateCompactionTrend({ trend: fitted.trend, bmlFt: bmlFt.subarray(nOld) }), nOld);
+    return { outcome: { ...fitted, values }, from: nOld };
+  }
+  return { outcome: { ...fitted, values: evaluateCompactionTrend({ trend: fitted.trend, bmlFt }) }, from: 0 };
+}
+
+function spliceResult<T extends PorePressureResult>(old: T | undefined, tail: PorePressureResult, from: number, n: number): PorePressureResult {
+  const ppPsi = old ? grow(old.ppPsi, n) : new Float64Array(n);
+  const flags = new Uint8Array(n);
+  if (old) flags.set(old.flags.subarray(0, Math.min(from, old.flags.length)));
+  ppPsi.set(tail.ppPsi, from);
+  flags.set(tail.flags, from);
+  return { ppPsi, flags, warnings: [] };
+}
+
+/**
+ * Append new depth samples to a while-drilling prediction and refresh every curve from the
+ * shallowest sample the new data can change (see the file header for each step's restart
+ * point). The returned prediction equals {@link predictPorePressure} on the concatenated
+ * well bit for bit; the input state is not changed.
+ *
+ * @param state from {@link startWhileDrilling} or a previous call
+ * @param chunk new samples below the current end (see {@link DepthSampleChunk})
+ * @returns a new {@link IncrementalPorePressureState}; `recomputedFromIndex` says where the
+ *   pointwise pore-pressure methods restarted
+ * @throws ShalepointError E_DEPTH_ORDER when the chunk is not below the well's end;
+ *   E_LENGTH for misaligned chunk curves; every error of the stage modules
+ * @example appendDepthSamples(state, { mdFt: [9000.5], tvdFt: [9000.5], curves: { gammaRay: [95], slowness: [120] } }).prediction.ppPsi
+ */
+export function appendDepthSamples(state: IncrementalPorePressureState, chunk: DepthSampleChunk): IncrementalPorePressureState {
+  const { options } = state;
+  const old = state.prediction;
+  const nOld = old.tvdFt.length;
+  const well = appendWell(state.well, chunk);
+  const n = well.tvdFt.length;
+  if (n === nOld) return { ...state, well, recomputedFromIndex: n };
+  const despike = options.despike ?? true;
+  const tvdFt = Float64Array.from(well.tvdFt);
+  const { tvdssFt, bmlFt } = depthReferenceArrays({ tvdFt, datums: well.datums });
+  const mudline = mudlineTvdFt(well.datums);
+  const raw = (role: string): Float64Array | undefined => well.curves[role]?.values;
+  const cleanFrom = Math.max(0, nOld - DESPIKE_HALF);
+  const dtUsPerFt = spliceDespiked(old.curves.dtUsPerFt, raw("slowness"), cleanFrom, despike);
+  const rhobGcc = spliceDespiked(old.curves.rhobGcc, raw("density"), cleanFrom, despike) as Float64Array;
+  const resOhmM = spliceDespiked(old.curves.resOhmM, raw("resistivity"), cleanFrom, despike);
+  const grApi = raw("gammaRay") as Float64Array;
+
+  // bad hole: pointwise on the new samples
+  const badHole = new Uint8Array(n);
+  badHole.set(old.badHole);
+  const caliper = raw("caliper");
+  const bitSize = raw("bitSize");
+  if (caliper !== undefined && bitSize !== undefined) {
+    badHole.set(flagBadHole({ caliperIn: caliper.subarray(nOld), bitSizeIn: bitSize.subarray(nOld), enlargementLimitIn: options.badHoleEnlargementIn }).isBadHole, nOld);
+  }
+
+  // overburden
+  const ob = updateOverburden(state, tvdFt, rhobGcc, dtUsPerFt, badHole, cleanFrom);
+  const hydrostaticPsi = grow(old.hydrostaticPsi, n);
+  hydrostaticPsi.set(hydrostaticPressure({ tvdFt: tvdFt.subarray(nOld), datums: well.datums, gradientPsiPerFt: options.hydrostaticGradientPsiPerFt }), nOld);
+
+  // shale points and lines
+  const pointCurves: Record<string, Float64Array> = {};
+  if (dtUsPerFt) pointCurves.dt = dtUsPerFt;
+  if (resOhmM) pointCurves.res = resOhmM;
+  const { pick: shale, cutKeyDepthFt } = updateShalePick(old.shale, tvdFt, grApi, pointCurves, options, nOld);
+  const maxGapFt = options.shale.maxGapFt ?? 1000;
+  const shaleLine: PorePressurePrediction["shaleLine"] = {};
+  let from = Math.min(ob.from, cleanFrom, nOld);
+  if (dtUsPerFt && old.shaleLine.dtUsPerFt) {
+    const r = updateShaleLine(old.shaleLine.dtUsPerFt, shale.points, shale.points.values.dt, cutKeyDepthFt, tvdFt, maxGapFt);
+    shaleLine.dtUsPerFt = r.line;
+    from = Math.min(from, r.from);
+  }
+  if (resOhmM && old.shaleLine.resOhmM) {
+    const r = updateShaleLine(old.shaleLine.resOhmM, shale.points, shale.points.values.res, cutKeyDepthFt, tvdFt, maxGapFt);
+    shaleLine.resOhmM = r.line;
+    from = Math.min(from, r.from);
+  }
+
+  const sonic = updateTrend(old.sonicTrend, options.sonicTrend, shale, shale.points.values.dt, mudline, bmlFt, nOld);
+  const resistivity = updateTrend(old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld);
+
+  const methods: PorePressurePrediction["methods"] = {};
+  const sub = (a: Float64Array, f: number): Float64Array => a.subarray(f);
+  if (options.eatonSonic && sonic.outcome && shaleLine.dtUsPerFt) {
+    const f = Math.min(from, sonic.from);
+    const exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
+    const ratio = eatonRatio({ log: "sonic", observed: sub(shaleLine.dtUsPerFt, f), trend: sub(sonic.outcome.values, f) });
+    const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
+    const r = spliceResult(old.methods.eatonSonic, tail, f, n);
+    methods.eatonSonic = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Eaton"), exponent };
+  }
+  if (options.eatonResistivity && resistivity.outcome && shaleLine.resOhmM) {
+    const f = Math.min(from, resistivity.from);
+    const exponent = options.eatonResistivity.exponent ?? EATON_RESISTIVITY_EXPONENT;
+    const ratio = eatonRatio({ log: "resistivity", observed: sub(shaleLine.resOhmM, f), trend: sub(resistivity.outcome.values, f) });
+    const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
+    const r = spliceResult(old.methods.eatonResistivity, tail, f, n);
+    methods.eatonResistivity = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Eaton"), exponent };
+  }
+  if (options.bowers && shaleLine.dtUsPerFt) {
+    const { a, b, v0FtPerS } = options.bowers;
+    let unloading = options.bowers.unloading;
+    const velocity = velocityFromSlownessLog(shaleLine.dtUsPerFt);
+    // Vmax is read once on the whole velocity log (as the full run does), then passed explicitly.
+    if (unloading && unloading.vmaxFtPerS === undefined) unloading = { ...unloading, vmaxFtPerS: velocityAtDepth(tvdFt, velocity, unloading.onsetTvdFt) };
+    const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
+    const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: sub(velocity, f), tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
+    const r = spliceResult(old.methods.bowers, tail, f, n);
+    const es = f > 0 && old.methods.bowers ? grow(old.methods.bowers.effectiveStressPsi, n) : new Float64Array(n);
+    es.set(tail.effectiveStressPsi, f);
+    methods.bowers = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Bowers"), effectiveStressPsi: es, sigmaMaxPsi: tail.sigmaMaxPsi, vmaxFtPerS: tail.vmaxFtPerS, a, b, u: unloading?.u ?? 1 };
+  }
+  if (options.equivalentDepth && sonic.outcome && shaleLine.dtUsPerFt) {
+    let first = 0;
+    while (first < n && !(Number.isFinite(sonic.outcome.values[first]) && bmlFt[first] > 0)) first++;
+    methods.equivalentDepth = equivalentDepthPorePressure({
+      overburdenPsi: ob.result.svPsi,
+      hydrostaticPsi,
+      tvdFt,
+      observed: shaleLine.dtUsPerFt,
+      trend: { kind: "sampled", tvdFt: tvdFt.subarray(first), values: sonic.outcome.values.subarray(first) },
+      searchTopTvdFt: Math.max(mudline, tvdFt[Math.min(first, n - 1)]),
+    });
+  }
+  const warnings: Warning[] = [...ob.result.warnings, ...shale.warnings];
+  for (const m of Object.values(methods)) if (m) warnings.push(...m.warnings);
+  const chosen = methods[old.primary];
+  if (!chosen) throw unsupported(`primary method '${old.primary}' without its inputs`);
+  const prediction: PorePressurePrediction = {
+    tvdFt,
+    tvdssFt,
+    bmlFt,
+    curves: { grApi: Float64Array.from(grApi), dtUsPerFt, rhobGcc, resOhmM },
+    badHole,
+    overburden: ob.result,
+    hydrostaticPsi,
+    shale,
+    shaleLine,
+    sonicTrend: sonic.outcome,
+    resistivityTrend: resistivity.outcome,
+    methods,
+    primary: old.primary,
+    ppPsi: chosen.ppPsi,
+    calibration: {},
+    warnings,
+  };
+  return { well, options, prediction, overburdenRun: ob.run, recomputedFromIndex: Math.min(from, sonic.from, resistivity.from) };
+}
+
+function updateOverburden(
+  state: IncrementalPorePressureState,
+  tvdFt: Float64Array,
+  rhobGcc: Float64Array,
+  dtUsPerFt: Float64Array | undefined,
+  badHole: Uint8Array,
+  cleanFrom: number,
+): { result: OverburdenResult; run: IncrementalPorePressureState["overburdenRun"]; from: number } {
+  const old = state.prediction.overburden;
+  const n = tvdFt.length;
+  const anchor = state.overburdenRun.anchorIndex;
+  if (anchor >= cleanFrom - 1) throw unsupported("a well whose density log starts within the last samples (run predictPorePressure on the whole well first)");
+  const filled = (s: number): boolean => s === OverburdenSource.interpolated || s === OverburdenSource.extendedLastValue;
+  let from = cleanFrom;
+  while (from - 1 > anchor && filled(old.source[from - 1])) from--;
+  const source = new Uint8Array(n);
+  source.set(old.source.subarray(0, from));
+  const rho = grow(old.densityUsedGcc, n);
+  const gardner = dtUsPerFt ? gardnerDensityFromSlowness({ slownessUsPerFt: dtUsPerFt.subarray(from) }) : undefined;
+  const PENDING = 255;
+  for (let i = from; i < n; i++) {
+    const g = gardner ? gardner[i - from] : NaN;
+    const d = rhobGcc[i];
+    const bad = badHole[i] !== 0;
+    if (Number.isFinite(d) && d > 0 && !bad) {
+      source[i] = OverburdenSource.densityLog;
+      rho[i] = d;
+    } else if (Number.isFinite(g)) {
+      source[i] = bad ? OverburdenSource.badHoleGardner : OverburdenSource.missingGardner;
+      rho[i] = g;
+    } else {
+      source[i] = PENDING;
+    }
+  }
+  let prev = from - 1;
+  for (let i = from; i < n; i++) {
+    if (source[i] !== PENDING) {
+      prev = i;
+      continue;
+    }
+    let next = i + 1;
+    while (next < n && source[next] === PENDING) next++;
+    for (let k = i; k < next; k++) {
+      if (next < n && tvdFt[next] > tvdFt[prev]) {
+        const t = (tvdFt[k] - tvdFt[prev]) / (tvdFt[next] - tvdFt[prev]);
+        rho[k] = rho[prev] + t * (rho[next] - rho[prev]);
+        source[k] = OverburdenSource.interpolated;
+      } else if (next < n) {
+        rho[k] = rho[prev];
+        source[k] = OverburdenSource.interpolated;
+      } else {
+        rho[k] = rho[prev];
+        source[k] = OverburdenSource.extendedLastValue;
+      }
+    }
+    i = next - 1;
+  }
+  const sumPsi = grow(state.overburdenRun.sumPsi, n);
+  const compPsi = grow(state.overburdenRun.compPsi, n);
+  const svPsi = grow(old.svPsi, n);
+  let sum = sumPsi[from - 1];
+  let comp = compPsi[from - 1];
+  for (let i = from; i < n; i++) {
+    const term = 0.5 * (rho[i - 1] + rho[i]) * PSI_PER_FT_PER_GCC * (tvdFt[i] - tvdFt[i - 1]);
+    const t = sum + term;
+    comp += Math.abs(sum) >= Math.abs(term) ? sum - t + term : term - t + sum;
+    sum = t;
+    sumPsi[i] = sum;
+    compPsi[i] = comp;
+    svPsi[i] = sum + comp;
+  }
+  const gradientPsiPerFt = grow(old.gradientPsiPerFt, n);
+  const emwPpg = grow(old.emwPpg, n);
+  for (let i = from; i < n; i++) {
+    gradientPsiPerFt[i] = tvdFt[i] > 0 ? svPsi[i] / tvdFt[i] : NaN;
+    emwPpg[i] = gradientPsiPerFt[i] / PSI_PER_FT_PER_PPG;
+  }
+  const ranges: OverburdenSourceRange[] = [];
+  for (let i = 0; i < n; ) {
+    let j = i;
+    while (j + 1 < n && source[j + 1] === source[i]) j++;
+    ranges.push({ source: OVERBURDEN_SOURCE_NAMES[source[i]], fromIndex: i, toIndex: j, fromTvdFt: tvdFt[i], toTvdFt: tvdFt[j], count: j - i + 1 });
+    i = j + 1;
+  }
+  return {
+    result: { svPsi, gradientPsiPerFt, emwPpg, densityUsedGcc: rho, source, ranges, warnings: old.warnings },
+    run: { anchorIndex: anchor, sumPsi, compPsi },
+    from,
+  };
+}

@@ -1,0 +1,134 @@
+/**
+ * appendDepthSamples must give exactly what predictPorePressure gives on the concatenated
+ * well. The outside reference here is the project's full pipeline run on the same data
+ * (own case: the demo well Quillon A-1); the tolerance is zero — every compared array must
+ * match bit for bit, because the update runs the same arithmetic in the same order.
+ */
+import { describe, it, expect } from "vitest";
+import { loadDemoWell } from "./demoWells.js";
+import { predictPorePressure, type PorePressurePredictionOptions, type PorePressurePrediction } from "../../src/pipeline/predictPorePressure.js";
+import { startWhileDrilling, appendDepthSamples, type DepthSampleChunk } from "../../src/pipeline/incrementalPorePressure.js";
+import type { Well } from "../../src/well/types.js";
+
+const a1 = loadDemoWell("quillon-a1");
+const mudline = a1.well.datums.rtElevationFt + a1.well.datums.waterDepthFt;
+
+function optionsFor(): PorePressurePredictionOptions {
+  const seg = [{ topBmlFt: 0, dtMatrixUsPerFt: 65, intervals: [{ topBmlFt: 900, baseBmlFt: 4300 }] }];
+  return {
+    hydrostaticGradientPsiPerFt: a1.hydrostaticPsiPerFt,
+    shale: { criterion: { kind: "grCutoff", cutoffApi: 85 } },
+    sonicTrend: { use: "fit", kind: "sonicExponential", segments: seg },
+    resistivityTrend: { use: "fit", kind: "resistivityLogLinear", segments: [{ topBmlFt: 0, intervals: [{ topBmlFt: 900, baseBmlFt: 4300 }] }] },
+    eatonSonic: {},
+    eatonResistivity: {},
+    bowers: { a: 10, b: 0.75 },
+    equivalentDepth: true,
+    primary: "eatonSonic",
+  };
+}
+
+function head(well: Well, n: number): Well {
+  const curves: Well["curves"] = {};
+  for (const [k, c] of Object.entries(well.curves)) curves[k] = { ...c, values: c.values.slice(0, n) };
+  return { ...well, mdFt: well.mdFt.slice(0, n), tvdFt: well.tvdFt.slice(0, n), curves };
+}
+
+function chunk(well: Well, from: number, to: number): DepthSampleChunk {
+  // Frozen plain arrays: the update must not write into the caller's chunk.
+  const curves: Record<string, readonly number[]> = {};
+  for (const [k, c] of Object.entries(well.curves)) curves[k] = Object.freeze(Array.from(c.values.slice(from, to)));
+  return Object.freeze({ mdFt: Object.freeze(Array.from(well.mdFt.slice(from, to))), tvdFt: Object.freeze(Array.from(well.tvdFt.slice(from, to))), curves: Object.freeze(curves) });
+}
+
+/** Index of the first element that differs (Object.is, so NaN equals NaN and −0 ≠ 0), or −1. */
+function firstDiff(a: ArrayLike<number> | undefined, b: ArrayLike<number> | undefined): number {
+  if (a === undefined || b === undefined) return a === b ? -1 : 0;
+  if (a.length !== b.length) return Math.min(a.length, b.length);
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return i;
+  return -1;
+}
+
+function expectSame(inc: PorePressurePrediction, full: PorePressurePrediction): void {
+  const pairs: [string, ArrayLike<number> | undefined, ArrayLike<number> | undefined][] = [
+    ["dt", inc.curves.dtUsPerFt, full.curves.dtUsPerFt],
+    ["rhob", inc.curves.rhobGcc, full.curves.rhobGcc],
+    ["res", inc.curves.resOhmM, full.curves.resOhmM],
+    ["badHole", inc.badHole, full.badHole],
+    ["sv", inc.overburden.svPsi, full.overburden.svPsi],
+    ["obSource", inc.overburden.source, full.overburden.source],
+    ["rhoUsed", inc.overburden.densityUsedGcc, full.overburden.densityUsedGcc],
+    ["ph", inc.hydrostaticPsi, full.hydrostaticPsi],
+    ["isShale", inc.shale.isShale, full.shale.isShale],
+    ["grUsed", inc.shale.grUsedApi, full.shale.grUsedApi],
+    ["ptIndex", inc.shale.points.index, full.shale.points.index],
+    ["ptDt", inc.shale.points.values.dt, full.shale.points.values.dt],
+    ["ptRes", inc.shale.points.values.res, full.shale.points.values.res],
+    ["lineDt", inc.shaleLine.dtUsPerFt, full.shaleLine.dtUsPerFt],
+    ["lineRes", inc.shaleLine.resOhmM, full.shaleLine.resOhmM],
+    ["sonicTrend", inc.sonicTrend?.values, full.sonicTrend?.values],
+    ["resTrend", inc.resistivityTrend?.values, full.resistivityTrend?.values],
+    ["eatonSonic", inc.methods.eatonSonic?.ppPsi, full.methods.eatonSonic?.ppPsi],
+    ["eatonSonicFlags", inc.methods.eatonSonic?.flags, full.methods.eatonSonic?.flags],
+    ["eatonRes", inc.methods.eatonResistivity?.ppPsi, full.methods.eatonResistivity?.ppPsi],
+    ["bowers", inc.methods.bowers?.ppPsi, full.methods.bowers?.ppPsi],
+    ["bowersSigma", inc.methods.bowers?.effectiveStressPsi, full.methods.bowers?.effectiveStressPsi],
+    ["eqDepth", inc.methods.equivalentDepth?.ppPsi, full.methods.equivalentDepth?.ppPsi],
+    ["pp", inc.ppPsi, full.ppPsi],
+  ];
+  for (const [name, a, b] of pairs) expect({ name, firstDiff: firstDiff(a, b) }).toEqual({ name, firstDiff: -1 });
+  expect(JSON.stringify(inc.sonicTrend?.trend)).toBe(JSON.stringify(full.sonicTrend?.trend));
+  expect(JSON.stringify(inc.resistivityTrend?.trend)).toBe(JSON.stringify(full.resistivityTrend?.trend));
+}
+
+describe("appendDepthSamples", () => {
+  const n = a1.well.tvdFt.length;
+  const full = predictPorePressure(a1.well, optionsFor());
+
+  it("equals predictPorePressure on the whole demo well after appending in uneven chunks (bit for bit)", () => {
+    // Own case: start below the trend's fit interval, then add 500, 1, 37 and the rest.
+    let start = 0;
+    while (a1.well.tvdFt[start] < mudline + 4300 + 500) start++;
+    let state = startWhileDrilling(head(a1.well, start), optionsFor());
+    const cuts = [start + 500, start + 501, start + 538, n];
+    let from = start;
+    for (const to of cuts) {
+      const before = state.prediction.ppPsi;
+      state = appendDepthSamples(state, chunk(a1.well, from, to));
+      expect(state.prediction.ppPsi.length).toBe(to);
+      // the update restarted close to the old end, not at the top of the well
+      expect(state.recomputedFromIndex).toBeGreaterThan(from - 200);
+      expect(before.length).toBe(from); // the old state was not changed
+      from = to;
+    }
+    expectSame(state.prediction, full);
+  });
+
+  it("refits a trend whose fit interval the new samples reach, and still equals the full run", () => {
+    let start = 0;
+    while (a1.well.tvdFt[start] < mudline + 2500) start++;
+    let state = startWhileDrilling(head(a1.well, start), optionsFor());
+    state = appendDepthSamples(state, chunk(a1.well, start, n));
+    expect(state.recomputedFromIndex).toBe(0); // trend moved: every sample recomputed
+    expectSame(state.prediction, full);
+  });
+
+  it("keeps a given (frozen) trend and equals the full run with that trend", () => {
+    const opts = optionsFor();
+    opts.sonicTrend = { use: "given", trend: full.sonicTrend!.trend };
+    const fullFrozen = predictPorePressure(a1.well, opts);
+    let start = 0;
+    while (a1.well.tvdFt[start] < mudline + 3000) start++;
+    let state = startWhileDrilling(head(a1.well, start), opts);
+    state = appendDepthSamples(state, chunk(a1.well, start, start + 800));
+    state = appendDepthSamples(state, chunk(a1.well, start + 800, n));
+    expectSame(state.prediction, fullFrozen);
+  });
+
+  it("rejects samples above the current end and calibration refits", () => {
+    const state = startWhileDrilling(head(a1.well, 20000), optionsFor());
+    expect(() => appendDepthSamples(state, chunk(a1.well, 19990, 20010))).toThrow(/below the current end/);
+    const opts = { ...optionsFor(), calibration: { observations: [], fitEatonExponents: true } };
+    expect(() => startWhileDrilling(a1.well, opts)).toThrow(expect.objectContaining({ code: "E_INCREMENTAL_UNSUPPORTED" }));
+  });
+});
