@@ -20,3 +20,4 @@ export * from "./synthetic/index.js";
 export * from "./present/index.js";
 export * from "./formula/index.js";
 export * from "./pipeline/index.js";
+export * from "./study/index.js";
