@@ -9,9 +9,9 @@
  */
 import { describe, expect, it, beforeAll } from "vitest";
 import { spawnSync } from "node:child_process";
-import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
-import { fileURLToPath } from "node:url";
+import { fileURLToPath, pathToFileURL } from "node:url";
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), "..", "..");
 const notebookDir = join(root, "notebooks");
@@ -23,6 +23,15 @@ interface NotebookJson {
   cells: { cell_type: string; source: string | string[]; outputs?: unknown[]; execution_count?: number | null }[];
 }
 const text = (s: string | string[]): string => (Array.isArray(s) ? s.join("") : s);
+
+/**
+ * Files a notebook promises to save: the `name.json` / `name.csv` in backticks on the line of
+ * its first cell that starts with "**Saves**" (the hand-over convention of notebooks/README.md).
+ */
+function promisedFiles(firstCell: string): string[] {
+  const line = firstCell.split("\n").find((l) => l.startsWith("**Saves**")) ?? "";
+  return [...line.matchAll(/`([\w.-]+\.(?:json|csv))`/g)].map((m) => m[1]);
+}
 
 beforeAll(() => {
   if (!existsSync(join(root, ".jupyter-local", "share", "jupyter", "kernels", "tslab", "kernel.json"))) {
@@ -58,7 +67,18 @@ describe("notebooks/*.ipynb", () => {
         expect(first).toMatch(/local regulations/);
       });
 
-      it("run-notebooks.py executes every cell without an error", () => {
+      // Hand-over convention (own case, notebooks/README.md): every notebook after 01 says what it
+      // needs from the one before and what it saves, so any notebook can be opened alone.
+      if (!name.startsWith("01-")) {
+        it("says what it needs from the notebook before and names the files it saves", () => {
+          const first = text(nb.cells[0].source);
+          expect(first).toMatch(/\*\*Needs from notebook 0\d:\*\*/);
+          expect(promisedFiles(first).length).toBeGreaterThan(0);
+        });
+      }
+
+      it("run-notebooks.py executes every cell without an error", async () => {
+        const startedMs = Date.now();
         const r = spawnSync(python, [join(root, "scripts", "run-notebooks.py"), join(notebookDir, name)], {
           cwd: root,
           encoding: "utf8",
@@ -71,6 +91,24 @@ describe("notebooks/*.ipynb", () => {
         const outputs = executed.cells.flatMap((c) => (c.outputs ?? []) as { output_type: string; name?: string }[]);
         expect(outputs.filter((o) => o.output_type === "error")).toEqual([]);
         expect(outputs.filter((o) => o.output_type === "stream" && o.name === "stderr")).toEqual([]);
+        // Every file the first cell promises was written by this run (1 s for file-time granularity).
+        for (const file of promisedFiles(text(nb.cells[0].source))) {
+          const full = join(notebookDir, "work", file);
+          expect(existsSync(full), `${name} promised notebooks/work/${file}`).toBe(true);
+          expect(statSync(full).mtimeMs).toBeGreaterThanOrEqual(startedMs - 1000);
+        }
+        if (name.startsWith("03-")) {
+          // Own case: the trend file written by 03's refit cell is a shalepoint-trend file whose
+          // recorded fit interval is the one typed in that cell (so the CLI reads what was fitted).
+          const refitCell = nb.cells.map((c) => text(c.source)).find((src) => src.startsWith("const sonicFit = refitTrend("));
+          expect(refitCell).toBeDefined();
+          const typed = /kind: "(\w+)".*topBmlFt: (\d+), baseBmlFt: (\d+)/.exec(refitCell ?? "");
+          expect(typed).not.toBeNull();
+          const { parseTrendFile } = (await import(pathToFileURL(join(root, "dist", "index.js")).href)) as typeof import("../../src/index.js");
+          const trend = parseTrendFile(readFileSync(join(notebookDir, "work", "quillon-a1.sonic-trend.json"), "utf8"), "quillon-a1.sonic-trend.json");
+          expect(trend.kind).toBe(typed?.[1]);
+          expect(trend.segments[0].fittedOn?.intervals).toEqual([{ topBmlFt: Number(typed?.[2]), baseBmlFt: Number(typed?.[3]) }]);
+        }
       }, 180_000);
     });
   }
