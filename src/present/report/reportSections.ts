@@ -41,7 +41,13 @@ function note(text: string): string {
   return `<p class="note">${escapeHtml(text)}</p>`;
 }
 
-/** Index of the sample nearest a depth on an increasing index; -1 outside [first, last] ± half a step. */
+/**
+ * Index of the sample nearest a depth on an increasing depth index (binary search).
+ * @param tvdFt depth index, ft, increasing
+ * @param depthFt the depth, ft
+ * @returns the index, or -1 outside [first − step/2, last + step/2] or for NaN
+ * @example nearestDepthSampleIndex([100, 100.5, 101], 100.7) // 1
+ */
 export function nearestDepthSampleIndex(tvdFt: ArrayLike<number>, depthFt: number): number {
   const n = tvdFt.length;
   if (n === 0 || !Number.isFinite(depthFt)) return -1;
@@ -57,7 +63,14 @@ export function nearestDepthSampleIndex(tvdFt: ArrayLike<number>, depthFt: numbe
   return Math.abs(tvdFt[hi] - depthFt) < Math.abs(depthFt - tvdFt[lo]) ? hi : lo;
 }
 
-/** Well identity, datums and the hydrostatic basis. */
+/**
+ * Report section: well identity, datums (air gap, water depth, mudline, seawater density),
+ * depth range, the hydrostatic basis (psi/ft and ppg = psi/ft × 231/12) and the file's header facts.
+ * @param input one well's report input
+ * @param id element id of the section, e.g. `well-1-header`
+ * @returns HTML of the section (all text escaped)
+ * @example reportHeaderSection(a1, "well-1-header").startsWith('<section class="block" id="well-1-header">') // true
+ */
 export function reportHeaderSection(input: WellReportInput, id: string): string {
   const { well, prediction: p } = input;
   const n = p.tvdFt.length;
@@ -83,11 +96,18 @@ export function reportHeaderSection(input: WellReportInput, id: string): string 
     id,
     "Well, datums and hydrostatic basis",
     table("kv", ["Item", "Value", "Unit"], rows) +
-      (facts.length > 0 ? `<details><summary>File header facts (${facts.length})</summary>${table("kv", ["Item", "Value"], facts)}</details>` : ""),
+      (facts.length > 0 ? table("kv facts", ["Item", "Value"], facts, `Header facts from the log file (${facts.length})`) : ""),
   );
 }
 
-/** Input files and log quality: curve summary, bad hole, spikes, overburden sources. */
+/**
+ * Report section: input files and log quality — curve summary (nulls, range, gaps, spikes),
+ * bad-hole count, shale points, and the overburden's density-source ranges.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section
+ * @example reportInputsSection(a1, "well-1-inputs").includes("Overburden fill ranges") // true
+ */
 export function reportInputsSection(input: WellReportInput, id: string): string {
   const { prediction: p, well } = input;
   let html = "";
@@ -175,7 +195,14 @@ function trendRows(label: string, t: TrendOutcome | undefined): string[][] {
   ]);
 }
 
-/** Normal compaction trends with their fit diagnostics. */
+/**
+ * Report section: normal compaction trends with their fit diagnostics (parameters ± standard
+ * error, n, R², residual standard deviation, depth range) and the Bowers parameters.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section
+ * @example reportTrendSection(a1, "well-1-trends").includes("R²") // true
+ */
 export function reportTrendSection(input: WellReportInput, id: string): string {
   const p = input.prediction;
   const rows = [...trendRows("Sonic", p.sonicTrend), ...trendRows("Resistivity", p.resistivityTrend)];
@@ -198,7 +225,13 @@ export function reportTrendSection(input: WellReportInput, id: string): string {
   return section(id, "Normal compaction trends", html + extra);
 }
 
-/** Compartments and pressure systems (only when given). */
+/**
+ * Report section: pressure intervals, seals, fluid-gradient lines and contacts.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section, or "" when the input has no compartment analysis
+ * @example reportCompartmentSection(b1WithoutCompartments, "well-2-compartments") // ""
+ */
 export function reportCompartmentSection(input: WellReportInput, id: string): string {
   const c = input.compartments;
   if (c === undefined || (c.classification === undefined && c.pressureSystems === undefined)) return "";
@@ -245,7 +278,11 @@ export interface ReportCalibrationPoint {
 
 /**
  * Measured pore pressures of a well as observations on its depth index: formation-pressure
- * tests (psi) and kicks (controlling EMW × TVD); points outside the index are left out.
+ * tests (psi) and kicks (controlling EMW × TVD, common practice, no source); points outside
+ * the index are counted and left out.
+ * @param input one well's report input
+ * @returns points (observation, quality, file depth) and the count outside the log
+ * @example reportCalibrationPoints(a1).points.length // 35 pressure tests + 1 kick = 36
  */
 export function reportCalibrationPoints(input: WellReportInput): { points: ReportCalibrationPoint[]; outside: number } {
   const z = input.prediction.tvdFt;
@@ -265,7 +302,13 @@ export function reportCalibrationPoints(input: WellReportInput): { points: Repor
   return { points, outside };
 }
 
-/** Misfit rows of the primary method at the calibration points (core porePressureMisfitTable). */
+/**
+ * Misfit rows of the primary pore-pressure method at the calibration points
+ * (porepressure/misfitTable: difference = predicted − measured, psi and ppg).
+ * @param input one well's report input
+ * @returns rows, the points they came from, and how many points lay outside the log
+ * @example reportPrimaryMisfitRows(a1).rows[0].measuredPsi // 2374.7 (first A-1 pressure test)
+ */
 export function reportPrimaryMisfitRows(input: WellReportInput): { rows: MisfitRow[]; points: ReportCalibrationPoint[]; outside: number } {
   const { points, outside } = reportCalibrationPoints(input);
   if (points.length === 0) return { rows: [], points, outside };
@@ -278,7 +321,14 @@ function rms(values: number[]): number {
   return f.length === 0 ? NaN : Math.sqrt(f.reduce((s, v) => s + v * v, 0) / f.length);
 }
 
-/** Calibration: measured against predicted pore pressure; leak-off tests against fracture pressure. */
+/**
+ * Report section: measured against predicted pore pressure (every method's RMS), refitted
+ * parameters, and leak-off / integrity tests against the fracture-pressure model.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section (numbers with raw `data-value`, named by `data-key`)
+ * @example reportCalibrationSection(a1, "well-1-calibration").includes('data-key="predictedPsi"') // true
+ */
 export function reportCalibrationSection(input: WellReportInput, id: string): string {
   const p = input.prediction;
   const { rows, points, outside } = reportPrimaryMisfitRows(input);
@@ -343,7 +393,14 @@ export function reportCalibrationSection(input: WellReportInput, id: string): st
   return section(id, "Calibration against measurements", html);
 }
 
-/** Window and casing: sections with shoe depth, mud weight and the limiting criterion. */
+/**
+ * Report section: narrowest window, and the casing sections (shoe depths, mud weight in ppg
+ * and psi/ft, what limits each section's top), plus planned-casing violations.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section
+ * @example reportWindowSection(a1, "well-1-window").includes("Casing points") // true
+ */
 export function reportWindowSection(input: WellReportInput, id: string): string {
   const sw = input.stressWindow;
   let html = "";
@@ -389,7 +446,14 @@ export function reportWindowSection(input: WellReportInput, id: string): string 
   return section(id, "Mud-weight window and casing", html);
 }
 
-/** Findings of one well: window, casing, stress, calibration flags. */
+/**
+ * Findings of one well: window closes/inverts, casing (no mud weight, plan violations),
+ * stress consistency, leak-off test flags, and measured points whose misfit exceeds
+ * {@link CALIBRATION_FLAG_PPG}.
+ * @param input one well's report input
+ * @returns finding lines in that order
+ * @example reportWellFindingLines(a1)[0].code // e.g. "F_WINDOW_CLOSES"
+ */
 export function reportWellFindingLines(input: WellReportInput): ReportFindingLine[] {
   const sw = input.stressWindow;
   const out: ReportFindingLine[] = [];
@@ -417,7 +481,13 @@ export function reportWellFindingLines(input: WellReportInput): ReportFindingLin
   return out;
 }
 
-/** Warnings of every stage counted by code: number of warnings and samples affected. */
+/**
+ * Warnings counted by code: number of warnings and samples affected (a warning's `count`,
+ * else 1), sorted by code.
+ * @param warnings warnings of any stages
+ * @returns one row per code
+ * @example countWarningsByCode([{ code: "W_A", message: "", count: 5 }, { code: "W_A", message: "" }]) // [{ code: "W_A", warnings: 2, samples: 6 }]
+ */
 export function countWarningsByCode(warnings: readonly Warning[]): { code: string; warnings: number; samples: number }[] {
   const m = new Map<string, { warnings: number; samples: number }>();
   for (const w of warnings) {
@@ -429,7 +499,14 @@ export function countWarningsByCode(warnings: readonly Warning[]): { code: strin
   return [...m.entries()].sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0)).map(([code, e]) => ({ code, ...e }));
 }
 
-/** Findings section of a well. */
+/**
+ * Report section: the well's findings ({@link reportWellFindingLines}) and the warnings of
+ * every stage counted by code.
+ * @param input one well's report input
+ * @param id element id of the section
+ * @returns HTML of the section
+ * @example reportFindingsSection(a1, "well-1-findings").includes("counted by code") // true
+ */
 export function reportFindingsSection(input: WellReportInput, id: string): string {
   const lines = reportWellFindingLines(input);
   let html =

@@ -6,6 +6,7 @@ import { chromium, type Browser, type Page } from "playwright-core";
 import { renderStudyReport } from "../../../src/present/report/renderStudyReport.js";
 import { wellPressureFigure, strideSampleIndices } from "../../../src/present/report/reportFigures.js";
 import { formatReportNumber, reportNumberCell, reportTextCell, rawNumberText } from "../../../src/present/report/formatReportNumber.js";
+import { nearestDepthSampleIndex, countWarningsByCode } from "../../../src/present/report/reportSections.js";
 import { plotlyBundleHtml } from "../../../src/present/notebookDisplay.js";
 import { renderChartPng } from "../../../src/present/report/renderChartPng.js";
 import type { StudyReportInput } from "../../../src/present/report/reportTypes.js";
@@ -255,6 +256,9 @@ describe("formatReportNumber and reportNumberCell", () => {
     expect(reportNumberCell(6234.2857, 0)).toBe('<td class="num" data-value="6234.2857">6,234</td>');
     expect(reportTextCell("<b>")).toBe("<td>&lt;b&gt;</td>");
     expect(strideSampleIndices(10, 4)).toEqual([0, 3, 6, 9]);
+    expect(nearestDepthSampleIndex([100, 100.5, 101], 100.7)).toBe(1);
+    expect(nearestDepthSampleIndex([100, 100.5, 101], 101.3)).toBe(-1);
+    expect(countWarningsByCode([{ code: "W_A", message: "", count: 5 }, { code: "W_A", message: "" }])).toEqual([{ code: "W_A", warnings: 2, samples: 6 }]);
     expect(strideSampleIndices(9, 4)).toEqual([0, 3, 6, 8]);
     expect(reportNumberCell(0.1 + 0.2, 2, 'a"b')).toBe('<td class="num" data-key="a&quot;b" data-value="0.30000000000000004">0.30</td>');
   });
