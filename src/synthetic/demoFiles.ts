@@ -443,8 +443,11 @@ are TVD below the rotary table except the survey (MD).
 
 Overburden: seawater column at 1.03 g/cc, then bulk density integrated downward step by step
 (0.5 ft, trapezoid with a predictor–corrector). Porosity φ = φ0·exp(−σmax/σc) (Athy's law
-written in effective stress; shale φ0 0.62, σc 2,800 psi, grain 2.70 g/cc; sand φ0 0.40,
-σc 5,500 psi, grain 2.65 g/cc); bulk density = φ·ρfluid + (1 − φ)·ρgrain. Minimum stress:
+written in effective stress; shale φ0 0.47, σc 3,500 psi, grain 2.70 g/cc; sand φ0 0.38,
+σc 5,500 psi, grain 2.65 g/cc); bulk density = φ·ρfluid + (1 − φ)·ρgrain. The shallow shale
+parameters are chosen so that the column-average density below the mudline stays within
+about 0.05 g/cc of the published near-mudline power law (Traugott 1997), as a calibrated
+basin would. Minimum stress:
 Eaton (1969), Shmin = ν/(1−ν)(Sv − Pp) + Pp, ν 0.42 (Quillon) and 0.40 (Marten).
 
 ## Design target for the pore-pressure engine

@@ -24,8 +24,8 @@ export interface DemoRockParameters {
 
 /** Basin-wide rock parameters (invented for the demo). */
 export const QUILLON_ROCK: DemoRockParameters = {
-  shale: { phi0: 0.62, sigmaCPsi: 2800, grainGcc: 2.7 },
-  sand: { phi0: 0.4, sigmaCPsi: 5500, grainGcc: 2.65 },
+  shale: { phi0: 0.47, sigmaCPsi: 3500, grainGcc: 2.7 },
+  sand: { phi0: 0.38, sigmaCPsi: 5500, grainGcc: 2.65 },
   bowers: { v0FtPerS: 5000, a: 10, b: 0.75, u: 3.5 },
   sandVelocity: { v0FtPerS: 5200, a: 14, b: 0.72 },
   shaleResistivity: { r0OhmM: 0.65, bPerFt: 1.1e-4, eatonExponent: 1.2 },

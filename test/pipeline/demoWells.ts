@@ -1,0 +1,71 @@
+/**
+ * Test helper: load a demo well (LAS + survey for the deviated one) and its designed truth.
+ * The truth files are read here, by tests only; prediction code never reads them.
+ */
+import { readFileSync, existsSync } from "node:fs";
+import { join, resolve } from "node:path";
+import { readWellFromLas } from "../../src/io/loadWell.js";
+import { readDirectionalSurvey } from "../../src/io/tables.js";
+import { surveyPathAtMd } from "../../src/well/surveyPathAtMd.js";
+import type { Well } from "../../src/well/types.js";
+
+export const DEMO = resolve(__dirname, "..", "..", "demo-logs");
+
+export interface DemoTruthRow {
+  tvdFt: number;
+  ppPsi: number;
+  svPsi: number;
+  shminPsi: number;
+  lithology: string;
+  zone: string;
+}
+
+export interface DemoWell {
+  slug: string;
+  well: Well;
+  hydrostaticPsiPerFt: number;
+  truth: DemoTruthRow[];
+  truthJson: { boundariesTvdssFt: Record<string, number | null>; datums: { mudlineTvdFt: number; rtElevationFt: number } };
+}
+
+export function loadDemoWell(slug: string): DemoWell {
+  const dir = join(DEMO, slug);
+  const text = readFileSync(join(dir, `${slug}.las`), "utf8");
+  const surveyFile = join(dir, "survey.csv");
+  let tvd: { kind: "callback"; tvdFromMd: (md: Float64Array) => Float64Array } | undefined;
+  if (existsSync(surveyFile)) {
+    const survey = readDirectionalSurvey(readFileSync(surveyFile, "utf8"), { file: "survey.csv" }).records;
+    tvd = { kind: "callback", tvdFromMd: (mdFt) => surveyPathAtMd({ survey, mdFt }).tvdFt };
+  }
+  const { well, las } = readWellFromLas(text, { file: `${slug}.las`, tvd });
+  const hydg = las.parameters.find((p) => p.mnemonic === "HYDG");
+  const hydrostaticPsiPerFt = hydg!.unit.toUpperCase() === "PSI/FT" ? Number(hydg!.value) : Number(hydg!.value) / 22.620590367;
+  const lines = readFileSync(join(dir, "truth.csv"), "utf8").trim().split("\n");
+  const head = lines[0].split(",");
+  const col = (name: string): number => head.indexOf(name);
+  const truth = lines.slice(1).map((l) => {
+    const f = l.split(",");
+    return {
+      tvdFt: Number(f[col("tvd_ft")]),
+      ppPsi: Number(f[col("pp_psi")]),
+      svPsi: Number(f[col("sv_psi")]),
+      shminPsi: Number(f[col("shmin_psi")]),
+      lithology: f[col("lithology")],
+      zone: f[col("zone")],
+    };
+  });
+  const truthJson = JSON.parse(readFileSync(join(dir, "truth.json"), "utf8"));
+  return { slug, well, hydrostaticPsiPerFt, truth, truthJson };
+}
+
+/** Index of the sample nearest to each truth row (same grid, so exact in practice). */
+export function nearestIndex(tvdFt: Float64Array, depthFt: number): number {
+  let lo = 0;
+  let hi = tvdFt.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (tvdFt[mid] <= depthFt) lo = mid;
+    else hi = mid;
+  }
+  return Math.abs(tvdFt[lo] - depthFt) <= Math.abs(tvdFt[hi] - depthFt) ? lo : hi;
+}
