@@ -240,6 +240,20 @@ describe("renderStudyReport", () => {
   });
 });
 
+describe("renderStudyReport, one well", () => {
+  it("has no offset section, keeps both cautions, and uses a given caution text escaped", () => {
+    const one = renderStudyReport(
+      { title: "B-1 only <i>", wells: [study.wells[1]], provenance: study.provenance, caution: "Estimates only <u>review</u>." },
+      { plotlyScriptHtml: "<script>/* plotly stub */</script>" },
+    );
+    expect(one).not.toContain('id="offset-wells"');
+    expect(one).toContain("<title>B-1 only &lt;i&gt;</title>");
+    expect(one.split("Estimates only &lt;u&gt;review&lt;/u&gt;.").length - 1).toBe(2);
+    expect(one).toContain('id="caution-top"');
+    expect(one).toContain('id="caution-bottom"');
+  });
+});
+
 describe("formatReportNumber and reportNumberCell", () => {
   it("formats with fixed decimals and thousands commas; keeps the raw value", () => {
     // CHECK-VALUES §0 own case: 12.0 ppg at 10,000 ft → 6234 psi (exact factor 12/231).
