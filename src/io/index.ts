@@ -5,3 +5,4 @@ export * from "./loadWell.js";
 export * from "./csv.js";
 export * from "./tables.js";
 export * from "./trendFile.js";
+export * from "./drillingData.js";
