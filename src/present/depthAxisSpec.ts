@@ -2,7 +2,7 @@
  * The depth axis shared by shalepoint's depth plots.
  */
 import type { AxisSpec } from "./figureSpec.js";
-import { escapeHtml } from "./escapeHtml.js";
+import { escapePlotlyText } from "./escapeHtml.js";
 
 /** How a plotted depth is measured (see well/types.ts for the definitions). */
 export type DepthReferenceLabel = "MD" | "TVD" | "TVDSS" | "BML";
@@ -33,7 +33,7 @@ export function depthAxisSpec({
   unit: "ft" | "m";
   title?: string;
 }): AxisSpec {
-  const words = title === undefined ? DEPTH_REFERENCE_TITLES[reference] : escapeHtml(title);
+  const words = title === undefined ? DEPTH_REFERENCE_TITLES[reference] : escapePlotlyText(title);
   return {
     title: { text: `${words} (${unit})` },
     autorange: "reversed",

@@ -45,3 +45,26 @@ export function jsonForScript(value: unknown): string {
   if (json === undefined) return "null";
   return json.replace(/[<>&\u007f-\uffff]/g, (c) => "\\u" + c.charCodeAt(0).toString(16).padStart(4, "0"));
 }
+
+const PLOTLY_ENTITIES: Readonly<Record<string, string>> = {
+  "&": "&amp;",
+  "<": "&lt;",
+  ">": "&gt;",
+  '"': "&#34;",
+  "'": "&#39;",
+};
+
+/**
+ * Escape text for a plotly title, axis title or legend name. Plotly renders these strings
+ * as a small subset of HTML, so markup from a file must be escaped; it decodes `&amp;`,
+ * `&lt;`, `&gt;` and numeric references but shows `&quot;` literally, so quotes are written
+ * as numeric references here (HTML Living Standard, §13.1.4 "Character references").
+ *
+ * @param text text to escape, e.g. a well name `Quillon "A-1"`
+ * @returns the escaped string
+ * @example escapePlotlyText('A "B" <i>') // "A &#34;B&#34; &lt;i&gt;"
+ */
+export function escapePlotlyText(text: unknown): string {
+  if (text === null || text === undefined) return "";
+  return String(text).replace(/[&<>"']/g, (c) => PLOTLY_ENTITIES[c]);
+}

@@ -8,7 +8,7 @@ import type { Well } from "../well/types.js";
 import type { AxisSpec, FigureSpec, LayoutSpec, TraceSpec } from "./figureSpec.js";
 import { plotValues } from "./figureSpec.js";
 import { depthAxisSpec, type DepthReferenceLabel } from "./depthAxisSpec.js";
-import { escapeHtml } from "./escapeHtml.js";
+import { escapePlotlyText } from "./escapeHtml.js";
 import {
   OKABE_ITO_BLACK,
   OKABE_ITO_BLUE,
@@ -116,7 +116,7 @@ export function logTrackFigure({
   const width = (1 - gap * (plans.length - 1)) / plans.length;
   const data: TraceSpec[] = [];
   const layout: LayoutSpec = {
-    title: { text: escapeHtml(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
+    title: { text: escapePlotlyText(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
     height: heightPx,
     showlegend: true,
     legend: { orientation: "h", x: 0, y: -0.03, yanchor: "top" },

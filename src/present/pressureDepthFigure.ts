@@ -7,7 +7,7 @@ import { ShalepointError } from "../errors.js";
 import { METRES_PER_FOOT, UNITS, convert } from "../units/index.js";
 import type { FigureSpec, LayoutSpec, TraceSpec } from "./figureSpec.js";
 import { depthAxisSpec } from "./depthAxisSpec.js";
-import { escapeHtml } from "./escapeHtml.js";
+import { escapePlotlyText } from "./escapeHtml.js";
 import { seriesColour } from "./palette.js";
 
 /** Units the x axis can show: pressure (psi, MPa) or equivalent mud weight (ppg, sg). */
@@ -125,13 +125,13 @@ export function pressureDepthFigure({
       const d = s.tvdFt[k] * depthFactor;
       y[k] = Number.isFinite(d) ? d : null;
     }
-    const base = { type: "scatter" as const, name: escapeHtml(s.name), x: seriesX(s, xUnit), y, connectgaps: false };
+    const base = { type: "scatter" as const, name: escapePlotlyText(s.name), x: seriesX(s, xUnit), y, connectgaps: false };
     return (s.style ?? "line") === "points"
       ? { ...base, mode: "markers" as const, marker: { color: colour, size: 8, symbol: s.markerSymbol ?? "circle" } }
       : { ...base, mode: "lines" as const, line: { color: colour, width: 2, dash: s.dash ?? "solid" } };
   });
   const layout: LayoutSpec = {
-    title: { text: escapeHtml(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
+    title: { text: escapePlotlyText(title), x: 0, xanchor: "left", y: 0.995, yanchor: "top" },
     height: heightPx,
     showlegend: true,
     legend: { orientation: "v", x: 1.02, y: 1, xanchor: "left", yanchor: "top" },

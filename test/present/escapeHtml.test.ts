@@ -4,7 +4,7 @@
  * &quot;; &#39; is the decimal reference to U+0027) — label: published.
  */
 import { describe, expect, it } from "vitest";
-import { escapeHtml, jsonForScript } from "../../src/present/index.js";
+import { escapeHtml, escapePlotlyText, jsonForScript } from "../../src/present/index.js";
 
 describe("escapeHtml", () => {
   it("neutralises a <script> element", () => {
@@ -50,5 +50,12 @@ describe("jsonForScript", () => {
   it("writes NaN and Infinity as null, like JSON.stringify", () => {
     expect(jsonForScript([1, NaN, Infinity])).toBe("[1,null,null]");
     expect(jsonForScript(undefined)).toBe("null");
+  });
+});
+
+describe("escapePlotlyText", () => {
+  it("escapes markup and writes quotes as numeric references (HTML Living Standard §13.1.4)", () => {
+    expect(escapePlotlyText('A "B" <i>&\'')).toBe("A &#34;B&#34; &lt;i&gt;&amp;&#39;");
+    expect(escapePlotlyText(undefined)).toBe("");
   });
 });

@@ -82,7 +82,8 @@ describe("logTrackFigure", () => {
   it("leaves out absent tracks and escapes the title", () => {
     const f = logTrackFigure({ title: '<img src=x onerror="alert(1)">', depthFt, depthReference: "MD", curves: { resistivityOhmM: curves.resistivityOhmM } });
     expect(axes(f, "xaxis").map((a) => a.title.text)).toEqual(["Deep resistivity (ohm·m)"]);
-    expect(f.layout.title.text).toBe("&lt;img src=x onerror=&quot;alert(1)&quot;&gt;");
+    // Plotly decodes numeric references but shows &quot; literally, so quotes are &#34; here.
+    expect(f.layout.title.text).toBe("&lt;img src=x onerror=&#34;alert(1)&#34;&gt;");
   });
 
   it("throws typed errors for no curves and for length mismatch", () => {

@@ -7,7 +7,7 @@ import { PSI_PER_FT_PER_PPG } from "../../units/index.js";
 import type { FigureSpec, TraceSpec } from "../figureSpec.js";
 import { pressureDepthFigure, type PressureDepthSeries } from "../pressureDepthFigure.js";
 import { depthAxisSpec } from "../depthAxisSpec.js";
-import { escapeHtml } from "../escapeHtml.js";
+import { escapePlotlyText } from "../escapeHtml.js";
 import { OKABE_ITO, SERIES_COLOUR_ORDER } from "../palette.js";
 import type { PrimaryPorePressureMethod } from "../../pipeline/predictPorePressure.js";
 import type { WellReportInput } from "./reportTypes.js";
@@ -185,6 +185,6 @@ export function offsetComparisonFigure(wells: readonly WellReportInput[], height
     });
   });
   fig.layout.yaxis = { ...depthAxisSpec({ reference: "TVDSS", unit: "ft" }), anchor: "x" };
-  fig.layout.title = { ...fig.layout.title, text: escapeHtml("Offset wells: pore pressure against depth below sea level") };
+  fig.layout.title = { ...fig.layout.title, text: escapePlotlyText("Offset wells: pore pressure against depth below sea level") };
   return fig;
 }
