@@ -38,10 +38,10 @@ export interface EquivalentDepthResult extends PorePressureResult {
   effectiveStressPsi: Float64Array;
 }
 
-/** Linear interpolation in a non-decreasing abscissa; NaN outside [x0, xn-1]. */
-function interpolate(x: ArrayLike<number>, y: ArrayLike<number>, xq: number): number {
+/** Index lo of the piece [x[lo], x[lo+1]] holding xq (binary search), or −1 outside [x0, xn-1]. */
+function bracketIndex(x: ArrayLike<number>, xq: number): number {
   const n = x.length;
-  if (!(n > 0 && xq >= x[0] && xq <= x[n - 1])) return NaN;
+  if (!(n > 0 && xq >= x[0] && xq <= x[n - 1])) return -1;
   let lo = 0;
   let hi = n - 1;
   while (hi - lo > 1) {
@@ -49,11 +49,23 @@ function interpolate(x: ArrayLike<number>, y: ArrayLike<number>, xq: number): nu
     if (x[mid] <= xq) lo = mid;
     else hi = mid;
   }
+  return lo;
+}
+
+/** Linear interpolation on the piece starting at lo (hi = lo + 1, or lo for one sample). */
+function pieceValue(x: ArrayLike<number>, y: ArrayLike<number>, lo: number, xq: number): number {
+  const hi = lo + 1 < x.length ? lo + 1 : lo;
   if (x[hi] === x[lo]) return y[lo];
   const t = (xq - x[lo]) / (x[hi] - x[lo]);
   if (t <= 0) return y[lo];
   if (t >= 1) return y[hi];
   return y[lo] + t * (y[hi] - y[lo]);
+}
+
+/** Linear interpolation in a non-decreasing abscissa; NaN outside [x0, xn-1]. */
+function interpolate(x: ArrayLike<number>, y: ArrayLike<number>, xq: number): number {
+  const lo = bracketIndex(x, xq);
+  return lo < 0 ? NaN : pieceValue(x, y, lo, xq);
 }
 
 function notMonotonic(what: string, value: unknown): never {
@@ -183,6 +195,7 @@ export function equivalentDepthPorePressure(input: {
     }
   }
 
+  let cursor = 0;
   for (let i = 0; i < n; i++) {
     const z = tvdFt[i];
     const x = observed[i];
@@ -192,7 +205,17 @@ export function equivalentDepthPorePressure(input: {
       flags[i] = PP_FLAG_MISSING_INPUT;
       continue;
     }
-    const tz = trendAt(z);
+    let tz: number;
+    if (sampledZ !== undefined && sampledV !== undefined) {
+      // Depths are non-decreasing, so the trend piece at z is found by a forward cursor
+      // (same piece and formula as interpolate()).
+      const nT = sampledZ.length;
+      if (!(z >= sampledZ[0] && z <= sampledZ[nT - 1])) tz = NaN;
+      else {
+        while (cursor + 2 < nT && sampledZ[cursor + 1] <= z) cursor++;
+        tz = pieceValue(sampledZ, sampledV, cursor, z);
+      }
+    } else tz = trendAt(z);
     if (!Number.isFinite(tz) || z < top) {
       flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
       continue;
@@ -240,8 +263,10 @@ export function equivalentDepthPorePressure(input: {
       }
       zE = 0.5 * (lo + hi);
     }
-    const svE = interpolate(tvdFt, overburdenPsi, zE);
-    const phE = interpolate(tvdFt, hydrostaticPsi, zE);
+    // Sv and Ph at Ze share one search of the depth index.
+    const lo = bracketIndex(tvdFt, zE);
+    const svE = lo < 0 ? NaN : pieceValue(tvdFt, overburdenPsi, lo, zE);
+    const phE = lo < 0 ? NaN : pieceValue(tvdFt, hydrostaticPsi, lo, zE);
     if (!(Number.isFinite(svE) && Number.isFinite(phE))) {
       flags[i] = PP_FLAG_MISSING_INPUT;
       continue;
