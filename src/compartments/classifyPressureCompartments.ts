@@ -92,6 +92,7 @@ export interface ClassifyPressureCompartmentsInput {
   minThicknessFt?: number;
   useMask?: Uint8Array;
   decimateEvery?: number;
+  decimateSpacingFt?: number;
   /**
    * Excess pressure below which an interval is hydrostatic, psi, > 0. Default 100 psi
    * (common practice, no source: about the scatter of log-derived pore pressure).

@@ -7,8 +7,13 @@
 import { ShalepointError, type Warning } from "../errors.js";
 import { identifyFluidFromGradient, type FluidGradientRanges, type GradientFluid } from "./identifyFluidFromGradient.js";
 
-/** Quality flag of a pressure test: `bad` points are excluded (and reported), `suspect` ones used and flagged. */
-export type PressureTestQuality = "good" | "suspect" | "bad";
+/**
+ * Quality flag of a pressure test. Two vocabularies are accepted: `good` / `fair` / `poor`
+ * (as in the project's pressure-test tables) and `good` / `suspect` / `bad`. `fair` ≡
+ * `suspect`: used, and the line is flagged `suspect-points`. `poor` ≡ `bad`: never fitted,
+ * rejected with a warning (a supercharged or lost-seal reading is not a formation pressure).
+ */
+export type PressureTestQuality = "good" | "fair" | "poor" | "suspect" | "bad";
 
 /** One formation-pressure test. */
 export interface PressureTestPoint {
@@ -20,12 +25,16 @@ export interface PressureTestPoint {
   quality?: PressureTestQuality;
   /** Free label (e.g. test number), echoed in the output. */
   label?: string;
+  /** Name of the sand the test was taken in; tests sharing a name define a sand interval for contacts. */
+  sand?: string;
 }
 
 /** A sand (permeable interval) in which a contact may lie, ft TVD. */
 export interface SandInterval {
   topFt: number;
   baseFt: number;
+  /** Sand name, when the interval came from the tests' `sand` names. */
+  name?: string;
 }
 
 /** A log-derived compartment to match lines against, ft TVD. */
@@ -85,20 +94,27 @@ export interface PressureTestReject {
 export interface FitPressureSystemsInput {
   tests: readonly PressureTestPoint[];
   /**
-   * A point belongs to a line when within this many psi of it, > 0. Default 5 psi (own
-   * choice: a few times the repeatability of a stabilised formation-pressure test). Near a
-   * contact, points within tolerance/(Δgradient) of it are ambiguous (≈ 14 ft for gas over
-   * brine at 5 psi).
+   * A point belongs to a line when within this many psi of it, > 0. Default 9 psi (own
+   * choice: three standard deviations of a 3-psi scatter between repeat stabilised tests).
+   * Near a contact, points within tolerance/(Δgradient) of it are ambiguous (≈ 25 ft for gas
+   * over brine at 9 psi); a test at the junction of two lines goes to the line it fits better.
    */
   tolerancePsi?: number;
-  /** Points a line needs, integer ≥ 2. Default 3. */
+  /** Points a line needs, integer ≥ 2. Default 3 (a gas leg is often only 3–4 tests). */
   minPointsPerLine?: number;
-  /** Plausible gradient range for any line, psi/ft. Default [0.02, 0.6]. */
+  /**
+   * Physical gradient range for any line, psi/ft. Default [0.02, 0.55] (common practice, no
+   * source: light gas to heavy brine; a steeper "line" joins two pressure systems).
+   */
   gradientRangePsiPerFt?: readonly [number, number];
   /** Logged depth range of the well, ft TVD; tests outside it are rejected with a warning. */
   wellTopFt?: number;
   wellBaseFt?: number;
-  /** Sands in which contacts may lie. Without them, a contact needs both legs within maxContactGapFt. */
+  /**
+   * Sands in which contacts may lie. Default: from the tests' `sand` names (see
+   * {@link sandIntervalsFromTestNames}); without either, a contact needs both legs within
+   * maxContactGapFt.
+   */
   sands?: readonly SandInterval[];
   /** Largest gap between two legs for a contact without sands, ft. Default 100 ft. */
   maxContactGapFt?: number;
@@ -114,45 +130,50 @@ export interface FitPressureSystemsResult {
   contacts: FluidContact[];
   /** Points not used, with reasons (bad quality, missing, outside well, fits no line). */
   rejected: PressureTestReject[];
+  /** Sand intervals the contacts were looked for in (given, or from the tests' sand names). */
+  sands: SandInterval[];
+  /** Tolerance and gradient range used. */
+  tolerancePsi: number;
+  gradientRangePsiPerFt: [number, number];
   warnings: Warning[];
 }
 
-const MAX_TESTS = 400;
-
 /**
- * Bend test: does splitting the points (sorted by depth) into an upper and a lower line
- * (each ≥ 3 points) fit significantly better than one line? F = ((RSS₁ − RSS₂)/2) /
- * (RSS₂/(n − 4)) against the upper α quantile of F(2, n − 4), which for 2 numerator degrees
- * of freedom has the closed form (ν/2)(α^(−2/ν) − 1); α = 0.01 divided by the number of
- * split positions tried (Bonferroni). Returns the larger part's indices, or null if straight.
+ * Sand intervals from the `sand` names of formation-pressure tests.
+ *
+ * Each distinct name becomes one interval from its shallowest to its deepest test, widened
+ * by half the test spacing on each side: top = z_min − s/2, base = z_max + s/2, with s the
+ * median spacing between consecutive tests of that name (a single test: s = 0). Tests
+ * without a name (or with a missing depth) are ignored. Own rule (common practice, no source:
+ * a contact is only read inside the sand that holds both legs).
+ *
+ * @param tests pressure tests (tvdFt in ft TVD, e.g. 11,547 ft; `sand` names)
+ * @returns intervals sorted by top, ft TVD, each with its name
+ * @throws nothing
+ * @example sandIntervalsFromTestNames([{ tvdFt: 11547, pressurePsi: 7494, sand: "Tarrant" },
+ *   { tvdFt: 11587, pressurePsi: 7498, sand: "Tarrant" }, { tvdFt: 11607, pressurePsi: 7500, sand: "Tarrant" }])
+ * // → [{ name: "Tarrant", topFt: 11532, baseFt: 11622 }] (spacings 40 and 20 ft, median 30)
  */
-function straightPart(idx: number[], Z: (i: number) => number, P: (i: number) => number): number[] | null {
-  const n = idx.length;
-  if (n < 6) return null;
-  const sorted = idx.slice().sort((u, v) => Z(u) - Z(v));
-  const rss = (a: number[]): number => {
-    const f = lsq(a.map(Z), a.map(P));
-    return f.rms * f.rms * a.length;
-  };
-  const rss1 = rss(sorted);
-  let best = Infinity;
-  let bestK = -1;
-  for (let k = 3; k <= n - 3; k++) {
-    const r = rss(sorted.slice(0, k)) + rss(sorted.slice(k));
-    if (r < best) {
-      best = r;
-      bestK = k;
-    }
+export function sandIntervalsFromTestNames(tests: readonly PressureTestPoint[]): SandInterval[] {
+  const byName = new Map<string, number[]>();
+  for (const t of tests) {
+    if (t.sand === undefined || t.sand === "" || !Number.isFinite(t.tvdFt)) continue;
+    const list = byName.get(t.sand) ?? [];
+    list.push(t.tvdFt);
+    byName.set(t.sand, list);
   }
-  const nu = n - 4;
-  const alpha = 0.01 / (n - 5);
-  const fCrit = (nu / 2) * (Math.pow(alpha, -2 / nu) - 1);
-  const F = best > 0 ? ((rss1 - best) / 2) / (best / nu) : rss1 > 0 ? Infinity : 0;
-  if (!(F > fCrit)) return null;
-  const upper = sorted.slice(0, bestK);
-  const lower = sorted.slice(bestK);
-  return lower.length >= upper.length ? lower : upper;
+  const out: SandInterval[] = [];
+  for (const [name, zs] of byName) {
+    zs.sort((u, v) => u - v);
+    const gaps = zs.slice(1).map((z, k) => z - zs[k]).sort((u, v) => u - v);
+    const m = gaps.length;
+    const spacing = m === 0 ? 0 : m % 2 === 1 ? gaps[(m - 1) / 2] : 0.5 * (gaps[m / 2 - 1] + gaps[m / 2]);
+    out.push({ name, topFt: zs[0] - spacing / 2, baseFt: zs[zs.length - 1] + spacing / 2 });
+  }
+  return out.sort((u, v) => u.topFt - v.topFt);
 }
+
+const MAX_TESTS = 400;
 
 function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms: number; maxAbs: number } {
   const n = z.length;
@@ -182,32 +203,113 @@ function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms:
   return { g, a: mp - g * mz, se, rms: Math.sqrt(ss / n), maxAbs };
 }
 
+/** Least-squares line over zs[j..i] (sorted arrays), optionally leaving out index `skip`. */
+function spanFit(zs: Float64Array, ps: Float64Array, j: number, i: number, skip: number): { g: number; a: number; rss: number; worst: number; worstAbs: number } {
+  let n = 0;
+  let mz = 0;
+  let mp = 0;
+  for (let k = j; k <= i; k++) {
+    if (k === skip) continue;
+    n++;
+    mz += zs[k];
+    mp += ps[k];
+  }
+  mz /= n;
+  mp /= n;
+  let szz = 0;
+  let szp = 0;
+  for (let k = j; k <= i; k++) {
+    if (k === skip) continue;
+    szz += (zs[k] - mz) ** 2;
+    szp += (zs[k] - mz) * (ps[k] - mp);
+  }
+  const g = szz > 0 ? szp / szz : NaN;
+  let rss = 0;
+  let worst = -1;
+  let worstAbs = -1;
+  for (let k = j; k <= i; k++) {
+    const r = Math.abs(ps[k] - mp - g * (zs[k] - mz));
+    if (k !== skip) rss += r * r;
+    if (r > worstAbs) {
+      worstAbs = r;
+      worst = k;
+    }
+  }
+  return { g, a: mp - g * mz, rss, worst, worstAbs };
+}
+
 /**
  * Pressure-system grouping of formation-pressure tests by fluid-gradient lines.
  *
- * 1. Points flagged `bad`, missing, or outside [wellTopFt, wellBaseFt] are rejected and
- *    reported (each with a warning).
- * 2. Exact small-set consensus search: every pair of remaining points defines a candidate
- *    line with a gradient inside `gradientRangePsiPerFt`; the one with the lowest MSAC
- *    score Σ min(r², tolerance²) (Torr & Zisserman 2000, CVIU 78(1):138–156) and at least
- *    `minPointsPerLine` points within `tolerancePsi` wins; its inliers are refit by
- *    least squares and re-selected until stable; if the inliers bend (a split into two lines
- *    of ≥ 3 points each passes an F test at 1 %, Bonferroni-corrected), only the larger
- *    straight part is kept and re-grown; the line is kept if it has at least
- *    `minPointsPerLine` points, its points are removed, and the search repeats. This is
- *    exhaustive over pairs (O(k³) per line for k points, so k ≤ 400), and robust to
- *    outliers in the sense of a maximum-consensus fit.
+ * A pressure system is a contiguous depth range of tests in one well, so lines are runs of
+ * depth-consecutive tests, and the grouping is an optimal partition of the depth-ordered
+ * tests (dynamic programming over partitions of an interval: Jackson et al. 2005, IEEE Signal
+ * Processing Letters 12(2):105–108, from memory):
+ * 1. Points flagged `poor`/`bad`, missing, or outside [wellTopFt, wellBaseFt] are rejected
+ *    and reported (each with a warning); `fair`/`suspect` points are used and flag their line.
+ * 2. The usable tests, sorted by depth, are split into runs; each run is either one test
+ *    left off every line (cost T², T = tolerancePsi) or a line of ≥ `minPointsPerLine`
+ *    tests (cost Σ r² + T²) whose least-squares gradient lies in `gradientRangePsiPerFt`
+ *    (default 0.02–0.55 psi/ft, common practice, no source) and whose every residual is
+ *    ≤ T; a line may leave out one interior outlier (its worst point, cost T² more). The
+ *    partition of least total cost wins — an MSAC-type score (each test costs min(r², T²);
+ *    Torr & Zisserman 2000, Computer Vision and Image Understanding 78(1):138–156, eq. 7)
+ *    plus T² per line, so a line must explain its tests well enough to pay for itself and
+ *    a straight run is not split without cause. Far-apart collinear tests with other tests
+ *    between them never form a line; a short gas leg over a water leg is its own line.
  * 3. Each line's fluid comes from its gradient (identifyFluidFromGradient, gradient ± 2 SE).
  * 4. Contacts: for a lighter line above a heavier one, the crossing depth
- *    z* = (a_heavy − a_light)/(g_light − g_heavy) must lie between the legs (±tolerance
- *    expressed in depth) and inside one sand holding both legs' nearest points (or, without
- *    sands, the legs must be within maxContactGapFt). Lines joined by contacts share a system.
+ *    z* = (a_heavy − a_light)/(g_light − g_heavy) must lie between the legs (± T expressed
+ *    in depth) and inside one sand holding both legs' nearest points (sands given, or from
+ *    the tests' `sand` names; without sands, the legs must be within maxContactGapFt).
+ *    Lines joined by contacts share a system.
  * 5. Each line is matched to the compartment with the largest depth overlap.
- * Fluid-gradient ranges: common practice, no source. Compartment concept: Bradley 1975,
- * AAPG Bulletin 59(6):957–973 (from memory).
+ * Compartment concept: Bradley 1975, AAPG Bulletin 59(6):957–973 (from memory). Cost
+ * O(k³) for k tests, so k ≤ 400.
  *
  * @param input see {@link FitPressureSystemsInput}
- * @returns lines (with fluid, flags, system and compartment), contacts, rejected points, warnings
+ * @returns lines (with fluid, flags, system and compartment), contacts, rejected points,
+ *   the sands used, warnings
+ * @throws ShalepointError E_RANGE for tolerance ≤ 0, minPointsPerLine < 2, a bad gradient
+ *   range or more than 400 tests; E_TOO_SHORT when fewer usable tests than minPointsPerLine.
+ * @example
+ * // CHECK-VALUES §11 own case: 5000 psi at 9000 ft, 5093 psi at 9200 ft (and 9100 ft on the line)
+ * // → one line, gradient 0.4650 psi/ft, water; a test at 9500 ft / 6000 psi fits no line.
+ */
+/**
+ * Pressure-system grouping of formation-pressure tests by fluid-gradient lines.
+ *
+ * A pressure system is a contiguous depth range of tests in one well, so lines are built from
+ * depth-contiguous groups of tests:
+ * 1. Points flagged `poor`/`bad`, missing, or outside [wellTopFt, wellBaseFt] are rejected
+ *    and reported (each with a warning); `fair`/`suspect` points are used and flag their line.
+ * 2. Line search, repeated while a line of ≥ `minPointsPerLine` points is found: every pair
+ *    of free tests with a gradient inside `gradientRangePsiPerFt` (default 0.02–0.55 psi/ft,
+ *    common practice, no source) defines a candidate; its group is the run of consecutive
+ *    free tests by depth holding both, within `tolerancePsi` of the line, where a single
+ *    outlier may be skipped (never two in a row, at most one per three inliers) and a test
+ *    already on another line ends the run. The candidate with the most inliers wins (ties:
+ *    smallest Σ r²); its inliers are refit by least squares and re-grouped until stable; if
+ *    the inliers bend (a split into two lines of ≥ 3 points each passes an F test at 1 %,
+ *    Bonferroni-corrected), only the larger straight part is kept. The winner's inliers and
+ *    skipped outliers are taken. Far-apart collinear tests with other tests between them
+ *    therefore never form a line.
+ * 3. Junctions: where the deepest test of one line is followed by the shallowest test of
+ *    another, each junction test moves to the line it fits better (if the donor keeps
+ *    `minPointsPerLine` points), with refits, until nothing moves.
+ * 4. Each line's fluid comes from its gradient (identifyFluidFromGradient, gradient ± 2 SE).
+ * 5. Contacts: for a lighter line above a heavier one, the crossing depth
+ *    z* = (a_heavy − a_light)/(g_light − g_heavy) must lie between the legs (± tolerance
+ *    expressed in depth) and inside one sand holding both legs' nearest points (sands given,
+ *    or from the tests' `sand` names; without sands, the legs must be within
+ *    maxContactGapFt). Lines joined by contacts share a system.
+ * 6. Each line is matched to the compartment with the largest depth overlap.
+ * Compartment concept: Bradley 1975, AAPG Bulletin 59(6):957–973 (from memory). Cost
+ * O(k³) per line for k tests, so k ≤ 400.
+ *
+ * @param input see {@link FitPressureSystemsInput}
+ * @returns lines (with fluid, flags, system and compartment), contacts, rejected points,
+ *   the sands used, warnings
  * @throws ShalepointError E_RANGE for tolerance ≤ 0, minPointsPerLine < 2, a bad gradient
  *   range or more than 400 tests; E_TOO_SHORT when fewer usable tests than minPointsPerLine.
  * @example
@@ -215,9 +317,9 @@ function lsq(z: number[], p: number[]): { g: number; a: number; se: number; rms:
  * // → one line, gradient 0.4650 psi/ft, water; a test at 9500 ft / 6000 psi fits no line.
  */
 export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureSystemsResult {
-  const tol = input.tolerancePsi ?? 5;
+  const tol = input.tolerancePsi ?? 9;
   const minPts = input.minPointsPerLine ?? 3;
-  const [gMin, gMax] = input.gradientRangePsiPerFt ?? [0.02, 0.6];
+  const [gMin, gMax] = input.gradientRangePsiPerFt ?? [0.02, 0.55];
   const maxGap = input.maxContactGapFt ?? 100;
   if (!(Number.isFinite(tol) && tol > 0)) throw new ShalepointError("E_RANGE", "tolerancePsi must be > 0", { param: "tolerancePsi", value: tol, unit: "psi", allowed: "> 0" });
   if (!Number.isInteger(minPts) || minPts < 2) throw new ShalepointError("E_RANGE", "minPointsPerLine must be an integer ≥ 2", { param: "minPointsPerLine", value: minPts, allowed: "integer ≥ 2" });
@@ -230,14 +332,15 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
   const rejected: PressureTestReject[] = [];
   const usable: number[] = [];
   input.tests.forEach((t, i) => {
-    const q = t.quality ?? "good";
+    const q: string = t.quality ?? "good";
     const base = { index: i, tvdFt: t.tvdFt, pressurePsi: t.pressurePsi };
     if (!(Number.isFinite(t.tvdFt) && Number.isFinite(t.pressurePsi))) {
       rejected.push({ ...base, reason: "missing-value" });
       warnings.push({ code: "W_TEST_MISSING_VALUE", message: `test ${t.label ?? i} has a missing depth or pressure: not used`, index: i });
-    } else if (q === "bad") {
+    } else if (q !== "good" && q !== "fair" && q !== "suspect") {
+      // poor, bad, or an unknown flag: never fitted.
       rejected.push({ ...base, reason: "bad-quality" });
-      warnings.push({ code: "W_TEST_BAD_QUALITY", message: `test ${t.label ?? i} at ${t.tvdFt} ft is flagged bad: not used`, index: i, depthFt: t.tvdFt });
+      warnings.push({ code: "W_TEST_BAD_QUALITY", message: `test ${t.label ?? i} at ${t.tvdFt} ft is flagged ${q}: not used`, index: i, depthFt: t.tvdFt });
     } else if ((input.wellTopFt !== undefined && t.tvdFt < input.wellTopFt) || (input.wellBaseFt !== undefined && t.tvdFt > input.wellBaseFt)) {
       rejected.push({ ...base, reason: "outside-well" });
       warnings.push({ code: "W_TEST_OUTSIDE_WELL", message: `test ${t.label ?? i} at ${t.tvdFt} ft lies outside the well's logged range: not used`, index: i, depthFt: t.tvdFt });
@@ -253,70 +356,64 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
       hint: rejected.length > 0 ? `${rejected.length} test(s) were rejected; see their quality flags and depths.` : undefined,
     });
   }
-  const tol2 = tol * tol;
   const Z = (i: number): number => input.tests[i].tvdFt;
   const P = (i: number): number => input.tests[i].pressurePsi;
+  const order = usable.slice().sort((u, v) => Z(u) - Z(v) || u - v);
+  const isSuspect = (k: number): boolean => input.tests[k].quality === "fair" || input.tests[k].quality === "suspect";
+  const m = order.length;
+  const zs = Float64Array.from(order, Z);
+  const ps = Float64Array.from(order, P);
+  const T2 = tol * tol;
 
-  type Found = { idx: number[]; fit: ReturnType<typeof lsq> };
-  const found: Found[] = [];
-  let remaining = usable.slice();
-  for (;;) {
-    if (remaining.length < minPts) break;
-    let bestIdx: number[] = [];
-    let bestScore = Infinity;
-    for (let a = 0; a < remaining.length; a++) {
-      for (let b = a + 1; b < remaining.length; b++) {
-        const ia = remaining[a];
-        const ib = remaining[b];
-        const dz = Z(ib) - Z(ia);
-        if (Math.abs(dz) < 1e-6) continue;
-        const g = (P(ib) - P(ia)) / dz;
-        if (g < gMin || g > gMax) continue;
-        // MSAC score: Σ min(r², tol²) over all remaining points (Torr & Zisserman 2000,
-        // Computer Vision and Image Understanding 78(1):138–156, eq. 7): fewer, tighter
-        // points beat more, looser ones.
-        const inl: number[] = [];
-        let score = 0;
-        for (const k of remaining) {
-          const r = P(k) - P(ia) - g * (Z(k) - Z(ia));
-          if (Math.abs(r) <= tol) {
-            inl.push(k);
-            score += r * r;
-          } else {
-            score += tol2;
-          }
-        }
-        if (inl.length >= minPts && score < bestScore) {
-          bestIdx = inl;
-          bestScore = score;
-        }
+  // Optimal partition: best[i] = least cost of the first i tests (by depth).
+  const best = new Float64Array(m + 1).fill(Infinity);
+  const from = new Int32Array(m + 1).fill(-1); // start of the last run
+  const skipAt = new Int32Array(m + 1).fill(-1); // skipped test of the last run, −1 none
+  best[0] = 0;
+  for (let i = 1; i <= m; i++) {
+    // Test i − 1 left off every line.
+    best[i] = best[i - 1] + T2;
+    from[i] = i - 1;
+    skipAt[i] = -2; // marks "no line"
+    for (let j = i - minPts; j >= 0; j--) {
+      if (!Number.isFinite(best[j])) continue;
+      const last = i - 1;
+      let fit = spanFit(zs, ps, j, last, -1);
+      let skip = -1;
+      if (!(fit.worstAbs <= tol) && last - j + 1 > minPts && fit.worst > j && fit.worst < last) {
+        skip = fit.worst;
+        fit = spanFit(zs, ps, j, last, skip);
+        if (!(fit.worstAbs <= tol) && fit.worst !== skip) continue;
+        // worstAbs may be the skipped point itself: check the others.
+        let ok = true;
+        for (let k = j; k <= last && ok; k++) if (k !== skip && Math.abs(ps[k] - fit.a - fit.g * zs[k]) > tol) ok = false;
+        if (!ok) continue;
+      } else if (!(fit.worstAbs <= tol)) {
+        continue;
+      }
+      if (!(fit.g >= gMin && fit.g <= gMax)) continue;
+      const cost = best[j] + fit.rss + T2 + (skip >= 0 ? T2 : 0);
+      if (cost < best[i]) {
+        best[i] = cost;
+        from[i] = j;
+        skipAt[i] = skip;
       }
     }
-    if (bestIdx.length < minPts) break;
-    // Refit and re-select until stable; when the inliers bend (two fluids, or two systems
-    // caught by one band), keep the larger straight part (at most 10 rounds).
-    let idx = bestIdx;
-    let fit = lsq(idx.map(Z), idx.map(P));
-    for (let round = 0; round < 10; round++) {
-      const part = straightPart(idx, Z, P);
-      if (part !== null) {
-        idx = part;
-        fit = lsq(idx.map(Z), idx.map(P));
-      }
-      const next = remaining.filter((k) => Math.abs(P(k) - fit.a - fit.g * Z(k)) <= tol);
-      if (next.length < minPts) break;
-      const same = next.length === idx.length && next.every((v, j) => v === idx[j]);
-      if (same && part === null) break;
-      idx = next;
-      fit = lsq(idx.map(Z), idx.map(P));
-      if (same) break;
-    }
-    if (idx.length < minPts) break;
-    if (fit.g < gMin || fit.g > gMax) break;
-    found.push({ idx: idx.slice().sort((u, v) => Z(u) - Z(v)), fit });
-    const taken = new Set(idx);
-    remaining = remaining.filter((k) => !taken.has(k));
   }
+  type Found = { idx: number[]; skipped: number[]; fit: ReturnType<typeof lsq> };
+  const found: Found[] = [];
+  for (let i = m; i > 0; i = from[i]) {
+    if (skipAt[i] === -2) continue;
+    const idx: number[] = [];
+    const skipped: number[] = [];
+    for (let k = from[i]; k < i; k++) (k === skipAt[i] ? skipped : idx).push(order[k]);
+    found.push({ idx, skipped, fit: lsq(idx.map(Z), idx.map(P)) });
+  }
+  found.sort((u, v) => Z(u.idx[0]) - Z(v.idx[0]));
+  const inLine = new Set<number>();
+  for (const f of found) for (const k of f.idx) inLine.add(k);
+  const remaining = order.filter((k) => !inLine.has(k)).sort((u, v) => u - v);
+  const sands: SandInterval[] = input.sands !== undefined ? input.sands.map((sd) => ({ ...sd })) : sandIntervalsFromTestNames(input.tests.filter((_, i) => usable.includes(i)));
 
   // Lines.
   const lines: FluidGradientLine[] = found.map((f, lineId) => {
@@ -327,7 +424,7 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
     const flags: string[] = [];
     if (f.idx.length === 2) flags.push("two-points");
     if (baseFt - topFt < 20) flags.push("short-span");
-    if (f.idx.some((k) => input.tests[k].quality === "suspect")) flags.push("suspect-points");
+    if (f.idx.some(isSuspect)) flags.push("suspect-points");
     if (fl.fluid === "undetermined") flags.push("fluid-undetermined");
     return {
       lineId,
@@ -363,10 +460,10 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
       const dzTol = tol / (lo.gradientPsiPerFt - up.gradientPsiPerFt);
       if (zc < up.baseFt - dzTol || zc > lo.topFt + dzTol) continue;
       let sand: SandInterval | null = null;
-      if (input.sands !== undefined) {
-        const s = input.sands.find((sd) => sd.topFt <= up.baseFt && sd.baseFt >= lo.topFt && zc >= sd.topFt - dzTol && zc <= sd.baseFt + dzTol);
+      if (sands.length > 0) {
+        const s = sands.find((sd) => sd.topFt <= up.baseFt && sd.baseFt >= lo.topFt && zc >= sd.topFt - dzTol && zc <= sd.baseFt + dzTol);
         if (s === undefined) continue;
-        sand = { topFt: s.topFt, baseFt: s.baseFt };
+        sand = { ...s };
       } else if (lo.topFt - up.baseFt > maxGap) {
         continue;
       }
@@ -417,5 +514,5 @@ export function fitPressureSystems(input: FitPressureSystemsInput): FitPressureS
     warnings.push({ code: "W_TEST_FITS_NO_LINE", message: `test ${input.tests[k].label ?? k} at ${Z(k)} ft fits no fluid-gradient line`, index: k, depthFt: Z(k) });
   }
   rejected.sort((u, v) => u.index - v.index);
-  return { lines, contacts, rejected, warnings };
+  return { lines, contacts, rejected, sands, tolerancePsi: tol, gradientRangePsiPerFt: [gMin, gMax], warnings };
 }

@@ -43,6 +43,15 @@ export interface SegmentPressureProfileInput {
    */
   decimateEvery?: number;
   /**
+   * Keep used samples at least this many ft of TVD apart (> 0; default: no depth
+   * decimation): the first used sample, then the next one at or below the last kept depth
+   * plus this spacing. Set it to the spacing of independent values when the profile is
+   * interpolated between sparser points (e.g. pore pressure from a shale line joining
+   * 20-ft shale points): the noise-based penalty and the segment costs then count
+   * independent values, not interpolated ones. Applied after `decimateEvery`.
+   */
+  decimateSpacingFt?: number;
+  /**
    * Spacing of admissible change positions, samples (see findChangePointsPelt). Default
    * `"auto"`: 1 (exact) up to 2000 used samples; above that, about nUsed/2000 (capped at
    * half the minimum segment) followed by refinement of each boundary to the sample.
@@ -186,7 +195,7 @@ export function compartmentIntervalStats(
  * @param input see {@link SegmentPressureProfileInput}
  * @returns segments with depth ranges and statistics, boundaries, the penalty used
  * @throws ShalepointError E_LENGTH when arrays differ in length; E_RANGE for a penalty ≤ 0,
- *   a thickness ≤ 0 or a bad decimation step; E_TOO_SHORT when fewer usable samples than
+ *   a thickness ≤ 0, a bad decimation step or spacing; E_TOO_SHORT when fewer usable samples than
  *   the minimum segment; E_ORDER when depth decreases.
  * @example
  * // 0–4000 ft hydrostatic, then excess rising 1 psi/ft to 6000 ft, then flat at 2000 psi
@@ -205,6 +214,10 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
   if (!Number.isInteger(every) || every < 1) {
     throw new ShalepointError("E_RANGE", "decimateEvery must be an integer ≥ 1", { param: "decimateEvery", value: every, allowed: "integer ≥ 1" });
   }
+  const spacingFt = input.decimateSpacingFt;
+  if (spacingFt !== undefined && !(Number.isFinite(spacingFt) && spacingFt > 0)) {
+    throw new ShalepointError("E_RANGE", "decimateSpacingFt must be a finite number > 0", { param: "decimateSpacingFt", value: spacingFt, unit: "ft", allowed: "> 0" });
+  }
   if (input.penaltyPsi2 !== undefined && !(Number.isFinite(input.penaltyPsi2) && input.penaltyPsi2 > 0)) {
     throw new ShalepointError("E_RANGE", "penaltyPsi2 must be a finite number > 0", { param: "penaltyPsi2", value: input.penaltyPsi2, unit: "psi²", allowed: "> 0" });
   }
@@ -216,6 +229,8 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
   let nMasked = 0;
   let nDecimated = 0;
   let seen = 0;
+  let nextKeepFt = -Infinity;
+  let lastFt = -Infinity;
   for (let i = 0; i < n0; i++) {
     excess[i] = ppPsi[i] - hydrostaticPsi[i];
     if (!(Number.isFinite(excess[i]) && Number.isFinite(tvdFt[i]))) {
@@ -226,10 +241,15 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
       nMasked++;
       continue;
     }
-    if (seen++ % every !== 0) {
+    if (spacingFt !== undefined && tvdFt[i] < lastFt) {
+      throw new ShalepointError("E_ORDER", "tvdFt must be non-decreasing", { param: "tvdFt", value: tvdFt[i], unit: "ft", row: i });
+    }
+    lastFt = tvdFt[i];
+    if (seen++ % every !== 0 || (spacingFt !== undefined && tvdFt[i] < nextKeepFt)) {
       nDecimated++;
       continue;
     }
+    if (spacingFt !== undefined) nextKeepFt = tvdFt[i] + spacingFt;
     used.push(i);
   }
   const warnings: Warning[] = [];

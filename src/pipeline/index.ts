@@ -2,3 +2,4 @@ export * from "./predictPorePressure.js";
 export * from "./predictStressWindow.js";
 export * from "./incrementalPorePressure.js";
 export * from "./predictCompartments.js";
+export * from "./incrementalDrillingPorePressure.js";
