@@ -1,0 +1,123 @@
+/** Render the benchmark results as BENCHMARKS.md (plain Markdown, no machine paths). */
+
+const TARGETS = [
+  { label: "LAS parse ≥ 100 MB/s (200,000 samples)", stage: "LAS parse (shalepoint readLas)", samples: 200000, check: (r) => r.mbPerS >= 100, show: (r) => `${r.mbPerS.toFixed(1)} MB/s` },
+  {
+    label: "LAS parse ≥ 3× the reference reader (200,000 samples)",
+    stage: "LAS parse (shalepoint readLas)",
+    samples: 200000,
+    check: (r, all) => r.medianMs * 3 <= ref(all, 200000).medianMs,
+    show: (r, all) => `${(ref(all, 200000).medianMs / r.medianMs).toFixed(1)}×`,
+  },
+  { label: "whole single-well pipeline, 200,000 samples < 15 ms", stage: "whole pipeline (pore pressure + stress window)", samples: 200000, check: (r) => r.medianMs < 15 },
+  { label: "Monte Carlo 1,000 × 40,000 < 0.7 s (numpy reference as stated in the issue: 1.3 s; aim ≤ 0.65 s)", stage: "Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", samples: 40000, check: (r) => r.medianMs < 650 },
+  { label: "trend refit + pore-pressure recompute, 40,000 samples < 3 ms", stage: "trend refit + Eaton recompute", samples: 40000, check: (r) => r.medianMs < 3 },
+  { label: "segmentation of a 200,000-sample profile < 200 ms", stage: "segmentation (segmentPressureProfile)", samples: 200000, check: (r) => r.medianMs < 200 },
+];
+
+function ref(all, samples) {
+  return all.find((r) => r.stage === "LAS parse (reference: las-js data())" && r.samples === samples);
+}
+const ms = (x) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x.toFixed(2));
+
+export function renderBenchmarks({ machine, results, memory, loadStart, loadEnd, quick }) {
+  const L = [];
+  L.push("# Benchmarks");
+  L.push("");
+  L.push("Written by `node bench/run.mjs` (after `npm run -s build`). Generated wells only: the");
+  L.push("fictional Quillon BENCH-1 of `bench/generateBenchWell.mjs` (invented data, seeded), at");
+  L.push("40,000 and 200,000 samples between 5,000 and 15,000 ft TVD. Speed is measured here and never");
+  L.push("asserted in tests.");
+  L.push("");
+  L.push("Caution: shalepoint's results are estimates for trained engineers; calibrate them to measured");
+  L.push("data and have them reviewed; local regulations and licensed practice govern.");
+  L.push("");
+  L.push("## Machine");
+  L.push("");
+  L.push(`- CPU: ${machine.cpu}, ${machine.cores} cores; memory ${machine.memoryGb.toFixed(1)} GB`);
+  L.push(`- Node ${machine.node} (V8 ${machine.v8}); ${machine.platform}`);
+  L.push(`- Run: ${machine.date}${quick ? " (quick mode: fewer runs)" : ""}`);
+  L.push(`- Load average (1/5/15 min) at start ${loadStart.map((x) => x.toFixed(2)).join(" / ")}, at end ${loadEnd.map((x) => x.toFixed(2)).join(" / ")}.`);
+  L.push("  The machine is shared: a 1-minute load above the core count means other processes took");
+  L.push("  CPU during the run and the medians are pessimistic; the `load` column is the 1-minute");
+  L.push("  load when each stage finished.");
+  L.push("");
+  L.push("## Targets");
+  L.push("");
+  L.push("| target | measured (median) | met |");
+  L.push("| --- | --- | --- |");
+  for (const t of TARGETS) {
+    const r = results.find((x) => x.stage === t.stage && x.samples === t.samples);
+    if (!r) {
+      L.push(`| ${t.label} | not measured | — |`);
+      continue;
+    }
+    const shown = t.show ? t.show(r, results) : `${ms(r.medianMs)} ms`;
+    L.push(`| ${t.label} | ${shown} | ${t.check(r, results) ? "yes" : "no"} |`);
+  }
+  if (memory) {
+    const ok = memory.pipeline.maxRssMb < 200;
+    L.push(`| peak memory of the 200,000-sample pipeline < 200 MB | ${memory.pipeline.maxRssMb.toFixed(0)} MB peak RSS of the whole process | ${ok ? "yes" : "no"} |`);
+  }
+  L.push("| demo study end to end (3 wells, report written) < 10 s | slot: the study runner has not landed yet | — |");
+  L.push("| append 500 samples to a 40,000-sample well and refresh all curves < 5 ms | slot: incremental update not implemented | — |");
+  L.push("");
+  if (memory) {
+    L.push("Memory: peak resident set of a fresh Node process that generates the 200,000-sample well and");
+    L.push(`runs the whole pipeline once (only the pipeline module loaded): ${memory.pipeline.maxRssMb.toFixed(0)} MB (the same process with the generated`);
+    L.push(`well only: ${memory.idle.maxRssMb.toFixed(0)} MB); peak V8 heap in use after a pipeline run ${memory.pipeline.peakHeapMb.toFixed(0)} MB.`);
+    L.push("");
+  }
+  L.push("## All stages");
+  L.push("");
+  L.push("Median, interquartile range (p25–p75) and fastest run, in ms, after warm-up runs.");
+  L.push("");
+  L.push("| stage | samples | median | p25–p75 | min | runs | MB/s | load |");
+  L.push("| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+  for (const r of results) {
+    L.push(`| ${r.stage} | ${r.samples.toLocaleString("en-US")} | ${ms(r.medianMs)} | ${ms(r.p25Ms)}–${ms(r.p75Ms)} | ${ms(r.minMs)} | ${r.runs} | ${r.mbPerS ? r.mbPerS.toFixed(1) : ""} | ${r.load1.toFixed(2)} |`);
+  }
+  L.push("");
+  L.push("The reference LAS reader is `las-js` (npm), called as `new Las(text, { loadFile: false }).data()`");
+  L.push("on the same text in the same run. It returns a row array; shalepoint's reader returns typed");
+  L.push("columns, header items and warnings and checks the file against LAS 2.0.");
+  L.push("");
+  L.push("## What was changed, and what limits the missed targets");
+  L.push("");
+  L.push("Profiled with `node --cpu-prof` on the 200,000-sample pipeline. Changed (output identical,");
+  L.push("checked against the previous code on random inputs and by the test suites):");
+  L.push("");
+  L.push("- `despikeLog` (Hampel identifier): the window is kept sorted as it slides (one removal, one");
+  L.push("  insertion per sample) and the MAD test r > k·1.4826·MAD is decided by counting deviations");
+  L.push("  below r/(k·1.4826) instead of sorting them (odd windows; even windows keep the full rule).");
+  L.push("  About 4× faster; it runs on four curves per pipeline call (GR, DT, RHOB, resistivity).");
+  L.push("- `equivalentDepthPorePressure`: for a sampled trend, Ze comes from a binary search for the");
+  L.push("  bracketing trend samples and the exact root of that linear piece (it was a 40-step");
+  L.push("  bisection with a binary-search interpolation at each step); the trend at Z is read with a");
+  L.push("  forward cursor; Sv and Ph at Ze share one search. Results agree with the bisection to");
+  L.push("  3e-9 psi on the benchmark well (the bisection's own tolerance is 1e-12 relative in depth).");
+  L.push("- `pickShalePoints`: one flat index list with offsets instead of an array per point, medians");
+  L.push("  with a typed scratch buffer.");
+  L.push("- `flagWarnings` counts all flag bits in one pass; `mudWeightWindow` builds its run flags in");
+  L.push("  typed arrays.");
+  L.push("");
+  L.push("Limits:");
+  L.push("");
+  L.push("- Whole pipeline under 15 ms at 200,000 samples is about 75 ns per sample for every stage");
+  L.push("  together. The pipeline makes roughly 60 new Float64Arrays of 200,000 values (about 100 MB");
+  L.push("  of fresh memory per call, since every stage returns new arrays and never mutates its");
+  L.push("  inputs), runs four Hampel despikes (a median and MAD over 11 samples each), and one or more");
+  L.push("  `Math.pow`/`Math.exp` per sample in Eaton ×2, Bowers, the trend, UCS and the stress");
+  L.push("  window. Meeting the target would need reused output buffers (an API change: stages would");
+  L.push("  write into caller-owned arrays) and a cheaper despike than Hampel (a behaviour change).");
+  L.push("- Monte Carlo (src/uncertainty, not changed here): 40 million realisation-samples, each with");
+  L.push("  an `exp` for Eaton's ratio^n and two exact quantile selections per depth over 1,000 draws;");
+  L.push("  the selection (Floyd–Rivest) over 2 × 1,000 values per depth dominates.");
+  L.push("- LAS parse figures depend strongly on machine load: the reader is a single pass over the");
+  L.push("  characters with no per-token strings.");
+  L.push("");
+  L.push("The numpy figures quoted in the issue (about 38 ms and 1.3 s for the same work) were not");
+  L.push("re-measured here.");
+  L.push("");
+  return L.join("\n");
+}

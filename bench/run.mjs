@@ -1,0 +1,247 @@
+#!/usr/bin/env node
+/**
+ * shalepoint benchmark harness: times each stage on generated wells of 40,000 and 200,000
+ * samples, compares the LAS reader with an independent npm LAS reader (las-js) on the same
+ * text, measures peak memory of the 200,000-sample pipeline in a fresh process, and writes
+ * BENCHMARKS.md (machine, load, median and spread, targets).
+ *
+ * Run after a build:   npm run -s build && node bench/run.mjs
+ * Options: --quick (fewer runs, no file written unless --write), --write, --only=<substring>
+ *
+ * Timing: warm-up runs (JIT), then at least `runs` timed runs and at least `minMs` of
+ * wall time; median, interquartile range (p25–p75) and min are reported. Speed is measured
+ * here only, never asserted in tests.
+ */
+import os from "node:os";
+import fs from "node:fs";
+import path from "node:path";
+import v8 from "node:v8";
+import { spawnSync } from "node:child_process";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { performance } from "node:perf_hooks";
+import { generateBenchWell, BENCH_DATUMS } from "./generateBenchWell.mjs";
+import { benchOptions, STRESS_OPTIONS, stressTests } from "./benchOptions.mjs";
+
+const here = path.dirname(fileURLToPath(import.meta.url));
+const root = path.resolve(here, "..");
+const args = new Set(process.argv.slice(2).filter((a) => !a.startsWith("--only=")));
+const only = (process.argv.find((a) => a.startsWith("--only=")) ?? "").slice(7);
+const quick = args.has("--quick");
+const write = args.has("--write") || !quick;
+
+if (process.argv[2] === "--memory-probe") {
+  await memoryProbe(process.argv[3], Number(process.argv[4]));
+  process.exit(0);
+}
+
+const sp = await import(pathToFileURL(path.join(root, "dist/index.js")).href);
+const { Las } = await import("las-js");
+
+// ---------------------------------------------------------------------------------------
+// harness
+function quantile(sorted, p) {
+  const h = (sorted.length - 1) * p;
+  const lo = Math.floor(h);
+  return sorted[lo] + (h - lo) * ((sorted[Math.min(lo + 1, sorted.length - 1)] ?? sorted[lo]) - sorted[lo]);
+}
+var sink = 0; // var: the memory probe runs before this line is reached
+function consume(r) {
+  if (r && typeof r === "object") sink += Object.keys(r).length;
+}
+async function measure(fn, { warmup = 3, runs = 15, minMs = 300, maxMs = 20000 } = {}) {
+  if (quick) {
+    warmup = Math.min(warmup, 1);
+    runs = Math.min(runs, 5);
+    minMs = 0;
+  }
+  for (let i = 0; i < warmup; i++) consume(await fn());
+  const times = [];
+  const t0 = performance.now();
+  while (times.length < runs || (performance.now() - t0 < minMs && times.length < 1000)) {
+    const s = performance.now();
+    consume(await fn());
+    times.push(performance.now() - s);
+    if (performance.now() - t0 > maxMs && times.length >= 3) break;
+  }
+  times.sort((a, b) => a - b);
+  return { medianMs: quantile(times, 0.5), p25Ms: quantile(times, 0.25), p75Ms: quantile(times, 0.75), minMs: times[0], runs: times.length, load1: os.loadavg()[0] };
+}
+
+const results = [];
+function record(stage, samples, m, extra = {}) {
+  const row = { stage, samples, ...m, ...extra };
+  results.push(row);
+  const mbps = extra.mbPerS ? `  ${extra.mbPerS.toFixed(1)} MB/s` : "";
+  console.log(
+    `${stage.padEnd(44)} ${String(samples).padStart(7)}  median ${fmt(m.medianMs)} ms  IQR ${fmt(m.p25Ms)}–${fmt(m.p75Ms)}  min ${fmt(m.minMs)}  n=${m.runs}  load ${m.load1.toFixed(2)}${mbps}`,
+  );
+}
+function fmt(ms) {
+  return ms >= 100 ? ms.toFixed(0) : ms >= 10 ? ms.toFixed(1) : ms.toFixed(2);
+}
+const want = (name) => only === "" || name.toLowerCase().includes(only.toLowerCase());
+
+// ---------------------------------------------------------------------------------------
+// stages
+async function benchSize(n) {
+  const g = generateBenchWell({ samples: n });
+  const { well, survey } = g;
+  const lasText = sp.writeLas(g.las);
+  const mb = Buffer.byteLength(lasText) / 1e6;
+  const options = benchOptions();
+
+  if (want("las parse")) {
+    const m = await measure(() => sp.readLas(lasText), { runs: 10 });
+    record("LAS parse (shalepoint readLas)", n, m, { mbPerS: mb / (m.medianMs / 1000), fileMb: mb });
+    const ref = await measure(async () => {
+      const las = new Las(lasText, { loadFile: false });
+      return { rows: (await las.data()).length };
+    }, { runs: 5, warmup: 1, minMs: 0 });
+    record("LAS parse (reference: las-js data())", n, ref, { mbPerS: mb / (ref.medianMs / 1000), fileMb: mb });
+  }
+  if (want("md→tvd")) {
+    const mdFt = new Float64Array(n);
+    for (let i = 0; i < n; i++) mdFt[i] = 5000 + (i * 13000) / (n - 1);
+    record("MD→TVD (surveyPathAtMd, minimum curvature)", n, await measure(() => sp.surveyPathAtMd({ survey, mdFt })));
+    const tvd = sp.surveyPathAtMd({ survey, mdFt }).tvdFt;
+    record("TVD→MD (mdAtTvdAlongSurvey)", n, await measure(() => sp.mdAtTvdAlongSurvey({ survey, tvdFt: tvd })));
+  }
+  const rhob = well.curves.density.values;
+  const dtRaw = well.curves.slowness.values;
+  const tvdFt = well.tvdFt;
+  const badHole = sp.flagBadHole({ caliperIn: well.curves.caliper.values, bitSizeIn: well.curves.bitSize.values }).isBadHole;
+  if (want("despike")) {
+    record("despike (Hampel, 11 samples)", n, await measure(() => sp.despikeLog({ values: dtRaw, window: { samples: 11 }, threshold: 3 })));
+  }
+  if (want("overburden")) {
+    record("overburden (integrateOverburden)", n, await measure(() => sp.integrateOverburden({ tvdFt, datums: BENCH_DATUMS, densityGcc: rhob, slownessUsPerFt: dtRaw, badHoleFlag: badHole })));
+  }
+  const base = sp.predictPorePressure(well, options);
+  const bmlFt = base.bmlFt;
+  const stress = { tvdFt, overburdenPsi: base.overburden.svPsi, hydrostaticPsi: base.hydrostaticPsi };
+  if (want("shale")) {
+    record("shale points (pickShalePoints)", n, await measure(() =>
+      sp.pickShalePoints({ tvdFt, grApi: well.curves.gammaRay.values, criterion: options.shale.criterion, minBedThicknessFt: 10, decimation: { kind: "window", windowFt: 20 }, curves: { dt: base.curves.dtUsPerFt, res: base.curves.resOhmM } })));
+  }
+  const pointBml = base.shale.points.tvdFt.map((t) => t - (BENCH_DATUMS.rtElevationFt + BENCH_DATUMS.waterDepthFt));
+  const fitArgs = { kind: "sonicExponential", bmlFt: pointBml, values: base.shale.points.values.dt, method: "huber", segments: options.sonicTrend.segments };
+  if (want("trend")) {
+    record("trend fit (sonic exp., Huber, on shale points)", n, await measure(() => sp.fitCompactionTrendSegments(fitArgs)));
+    record("trend evaluate (evaluateCompactionTrend)", n, await measure(() => sp.evaluateCompactionTrend({ trend: base.sonicTrend.trend, bmlFt })));
+  }
+  const observed = base.shaleLine.dtUsPerFt;
+  if (want("eaton")) {
+    record("Eaton sonic (ratio + pore pressure)", n, await measure(() => {
+      const ratio = sp.eatonRatio({ log: "sonic", observed, trend: base.sonicTrend.values });
+      return sp.eatonPorePressure({ ...stress, ratio, exponent: 3 });
+    }));
+  }
+  if (want("bowers")) {
+    const velocityFtPerS = sp.velocityFromSlownessLog(observed);
+    record("Bowers (virgin + unloading)", n, await measure(() => sp.bowersPorePressure({ ...stress, velocityFtPerS, a: 10, b: 0.75, unloading: { onsetTvdFt: 13000, vmaxFtPerS: 11000, u: 3.5 } })));
+  }
+  if (want("equivalent")) {
+    let first = 0;
+    while (!(Number.isFinite(base.sonicTrend.values[first]) && bmlFt[first] > 0)) first++;
+    record("equivalent depth (Foster & Whalen)", n, await measure(() => sp.equivalentDepthPorePressure({
+      ...stress, observed, trend: { kind: "sampled", tvdFt: tvdFt.subarray(first), values: base.sonicTrend.values.subarray(first) }, searchTopTvdFt: tvdFt[first],
+    })));
+  }
+  if (want("refit")) {
+    // A user drags a trend handle: refit on the shale points, re-evaluate, recompute Eaton.
+    record("trend refit + Eaton recompute", n, await measure(() => {
+      const fit = sp.fitCompactionTrendSegments(fitArgs);
+      const trend = sp.evaluateCompactionTrend({ trend: fit.trend, bmlFt });
+      const ratio = sp.eatonRatio({ log: "sonic", observed, trend });
+      return sp.eatonPorePressure({ ...stress, ratio, exponent: 3 });
+    }));
+  }
+  if (want("pipeline")) {
+    record("pore-pressure pipeline (predictPorePressure)", n, await measure(() => sp.predictPorePressure(well, options)));
+    const pp = base.ppPsi;
+    const win = { tvdFt, ppPsi: pp, svPsi: base.overburden.svPsi };
+    const so = { ...STRESS_OPTIONS, stressTests: stressTests(), wellbore: { ...STRESS_OPTIONS.wellbore, dtUsPerFt: observed } };
+    record("stress + window (predictStressWindow)", n, await measure(() => sp.predictStressWindow(win, so)));
+    record("whole pipeline (pore pressure + stress window)", n, await measure(() => {
+      const p = sp.predictPorePressure(well, options);
+      return sp.predictStressWindow({ tvdFt: p.tvdFt, ppPsi: p.ppPsi, svPsi: p.overburden.svPsi }, { ...so, wellbore: { ...so.wellbore, dtUsPerFt: p.shaleLine.dtUsPerFt } });
+    }));
+  }
+  if (want("segment") && typeof sp.segmentPressureProfile === "function") {
+    record("segmentation (segmentPressureProfile)", n, await measure(() => sp.segmentPressureProfile({ tvdFt, ppPsi: base.ppPsi, hydrostaticPsi: base.hydrostaticPsi }), { runs: 7, warmup: 1 }));
+  }
+  if (want("monte") && n === 40000 && typeof sp.simulatePressureUncertainty === "function") {
+    const mc = () => sp.simulatePressureUncertainty({
+      tvdFt, bmlFt, overburdenPsi: base.overburden.svPsi, hydrostaticPsi: base.hydrostaticPsi, observed,
+      porePressure: { kind: "eaton", exponent: { kind: "normal", mean: 3, std: 0.3 }, trend: base.sonicTrend.trend, trendCovariance: base.sonicTrend.diagnostics.map((d) => d.covariance ?? null) },
+      fracture: { kind: "eaton1969", poissonRatio: { kind: "truncatedNormal", mean: 0.42, std: 0.03, min: 0.3, max: 0.49 } },
+      overburdenFactor: { kind: "normal", mean: 1, std: 0.02 },
+      realisations: 1000, seed: 7,
+    });
+    record("Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", n, await measure(mc, { runs: 5, warmup: 1, minMs: 0 }));
+  }
+}
+
+async function memoryProbe(mode, n) {
+  // Only the pipeline module: the package barrel also loads the formula and I/O modules
+  // (mathjs, zod), which a pipeline run does not use.
+  const spm = await import(pathToFileURL(path.join(root, "dist/pipeline/index.js")).href);
+  const g = generateBenchWell({ samples: n });
+  const options = benchOptions();
+  global.gc?.();
+  const before = process.memoryUsage();
+  let peakHeap = 0;
+  if (mode === "pipeline") {
+    for (let k = 0; k < 1; k++) {
+      const p = spm.predictPorePressure(g.well, options);
+      const w = spm.predictStressWindow({ tvdFt: p.tvdFt, ppPsi: p.ppPsi, svPsi: p.overburden.svPsi }, { ...STRESS_OPTIONS, stressTests: stressTests(), wellbore: { ...STRESS_OPTIONS.wellbore, dtUsPerFt: p.shaleLine.dtUsPerFt } });
+      peakHeap = Math.max(peakHeap, v8.getHeapStatistics().used_heap_size);
+      sink += w.shminPsi.length;
+    }
+  }
+  // Peak RSS of this process: VmHWM from /proc (reset at exec). getrusage's maxRSS is not
+  // used on Linux because it keeps the high-water mark of the forking parent across exec.
+  let peakKb = process.resourceUsage().maxRSS;
+  try {
+    const m = /VmHWM:\s+(\d+) kB/.exec(fs.readFileSync("/proc/self/status", "utf8"));
+    if (m) peakKb = Number(m[1]);
+  } catch {
+    // not Linux: keep maxRSS
+  }
+  console.log(JSON.stringify({ maxRssMb: peakKb / 1024, rssBeforeMb: before.rss / 2 ** 20, heapBeforeMb: before.heapUsed / 2 ** 20, peakHeapMb: peakHeap / 2 ** 20 }));
+}
+
+function probe(mode, n) {
+  const r = spawnSync(process.execPath, ["--expose-gc", fileURLToPath(import.meta.url), "--memory-probe", mode, String(n)], { encoding: "utf8" });
+  if (r.status !== 0) throw new Error(`memory probe failed: ${r.stderr}`);
+  return JSON.parse(r.stdout.trim().split("\n").pop());
+}
+
+// ---------------------------------------------------------------------------------------
+const machine = {
+  cpu: os.cpus()[0]?.model ?? "unknown",
+  cores: os.cpus().length,
+  memoryGb: os.totalmem() / 2 ** 30,
+  node: process.version,
+  v8: process.versions.v8,
+  platform: `${os.type()} ${os.release()} ${os.arch()}`,
+  date: new Date().toISOString(),
+};
+console.log(`machine: ${machine.cpu}, ${machine.cores} cores, ${machine.memoryGb.toFixed(1)} GB, Node ${machine.node}`);
+const loadStart = os.loadavg();
+for (const n of [40000, 200000]) await benchSize(n);
+let memory = null;
+if (want("memory")) {
+  memory = { idle: probe("idle", 200000), pipeline: probe("pipeline", 200000) };
+  console.log(`memory: 200,000-sample pipeline peak RSS ${memory.pipeline.maxRssMb.toFixed(0)} MB (process with the generated well only: ${memory.idle.maxRssMb.toFixed(0)} MB); peak V8 heap ${memory.pipeline.peakHeapMb.toFixed(0)} MB`);
+}
+const loadEnd = os.loadavg();
+
+if (write) {
+  const { renderBenchmarks } = await import("./renderBenchmarks.mjs");
+  const text = renderBenchmarks({ machine, results, memory, loadStart, loadEnd, quick });
+  fs.writeFileSync(path.join(root, "BENCHMARKS.md.tmp"), text);
+  fs.renameSync(path.join(root, "BENCHMARKS.md.tmp"), path.join(root, "BENCHMARKS.md"));
+  console.log("wrote BENCHMARKS.md");
+}
+if (sink === -1) console.log(sink);
