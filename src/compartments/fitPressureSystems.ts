@@ -97,7 +97,8 @@ export interface FitPressureSystemsInput {
    * A point belongs to a line when within this many psi of it, > 0. Default 9 psi (own
    * choice: three standard deviations of a 3-psi scatter between repeat stabilised tests).
    * Near a contact, points within tolerance/(Δgradient) of it are ambiguous (≈ 25 ft for gas
-   * over brine at 9 psi); a test at the junction of two lines goes to the line it fits better.
+   * over brine at 9 psi); the least-cost partition gives such a test to the leg it fits better.
+   * Also the cost of a test left off every line and of each line (T², see below).
    */
   tolerancePsi?: number;
   /** Points a line needs, integer ≥ 2. Default 3 (a gas leg is often only 3–4 tests). */

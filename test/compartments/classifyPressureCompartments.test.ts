@@ -106,6 +106,19 @@ describe("segmentPressureProfile — designed profile (own case)", () => {
     // The 900 psi drop between the two compartments shows as a negative boundary jump.
     expect(Math.abs(c.boundaries[1].excessJumpPsi + 900)).toBeLessThan(30);
   });
+  it("decimateSpacingFt 20: one sample per 20 ft (451 of 4501), boundaries still within ±50 ft (sharp) / ±150 ft (gentle kink)", () => {
+    const w = designedWell();
+    const r = segmentPressureProfile({ tvdFt: w.tvdFt, ppPsi: w.ppPsi, hydrostaticPsi: w.hydrostaticPsi, decimateSpacingFt: 20 });
+    // 5000–14,000 ft at 2 ft, kept every 20 ft: 9000/20 + 1 = 451 samples, 4050 counted as skipped.
+    expect(r.nUsed).toBe(451);
+    expect(r.nSkipped).toBe(4050);
+    expect(r.stepFt).toBe(20);
+    const truth = [8000, 8600, 10400, 10800, 12000];
+    const tol = [50, 50, 50, 50, 150];
+    expect(r.boundariesFt).toHaveLength(truth.length);
+    r.boundariesFt.forEach((b, k) => expect(Math.abs(b - truth[k])).toBeLessThan(tol[k]));
+    for (const bad of [0, -1, NaN]) expect(() => segmentPressureProfile({ ...w, decimateSpacingFt: bad })).toThrow(/decimateSpacingFt/);
+  });
   it("missing pressure samples are skipped and counted, with a warning", () => {
     const w = designedWell();
     const pp = w.ppPsi.slice();
