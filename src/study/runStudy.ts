@@ -32,8 +32,8 @@ import { predictStressWindow, type FractureMethodChoice, type StressWindowPredic
 import type { PressureObservation, MisfitTable } from "../porepressure/misfitTable.js";
 import { porePressureMisfitTable } from "../porepressure/misfitTable.js";
 import type { StressTestPoint } from "../stress/fractureCalibration.js";
-import { classifyPressureCompartments } from "../compartments/classifyPressureCompartments.js";
-import { fitPressureSystems, type PressureTestPoint } from "../compartments/fitPressureSystems.js";
+import type { PressureTestPoint } from "../compartments/fitPressureSystems.js";
+import { predictCompartments } from "../pipeline/predictCompartments.js";
 import { simulatePressureUncertainty, type PressureUncertaintyResult } from "../uncertainty/simulatePressureUncertainty.js";
 import type { CompactionTrendKind } from "../trend/trendTypes.js";
 import type { StudyFinding, StudyProvenance, WellReportInput } from "../present/report/reportTypes.js";
@@ -341,37 +341,29 @@ export function runStudy(config: StudyConfig, options: RunStudyOptions = {}): St
     tick(w.id, "compartments");
     const compartments: StudyWellResult["compartments"] = {};
     try {
-      compartments.classification = classifyPressureCompartments({
+      // One pressure-system test per row; poor tests are passed on and rejected (with a
+      // warning) by the fit, never silently dropped.
+      const tests: PressureTestPoint[] = (tables.pressureTests ?? []).map((t) => ({
+        tvdFt: t.tvdFt,
+        pressurePsi: t.pressurePsi,
+        quality: t.quality,
+        sand: t.sand,
+        label: t.sand ?? `row ${t.row}`,
+      }));
+      const found = predictCompartments({
         tvdFt: prediction.tvdFt,
         ppPsi: prediction.ppPsi,
         hydrostaticPsi: prediction.hydrostaticPsi,
         shaleFlag: prediction.shale.isShale,
+        pressureTests: tests,
+        shalePointSpacingFt: m.shale.pointSpacingFt,
       });
-      warnings.push(...compartments.classification.warnings);
+      compartments.classification = found.classification;
+      if (found.pressureSystems !== null) compartments.pressureSystems = found.pressureSystems;
+      warnings.push(...found.warnings);
     } catch (e) {
       if (!(e instanceof ShalepointError)) throw e;
       warnings.push({ code: "W_STUDY_NO_COMPARTMENTS", message: `compartments not found: ${e.message}` });
-    }
-    if ((tables.pressureTests ?? []).length > 0) {
-      const qualityMap = { good: "good", fair: "suspect", poor: "bad" } as const;
-      const tests: PressureTestPoint[] = tables.pressureTests!.map((t) => ({
-        tvdFt: t.tvdFt,
-        pressurePsi: t.pressurePsi,
-        quality: qualityMap[t.quality],
-        label: t.sand ?? `row ${t.row}`,
-      }));
-      try {
-        compartments.pressureSystems = fitPressureSystems({
-          tests,
-          wellTopFt: well.tvdFt[0],
-          wellBaseFt: well.tvdFt[well.tvdFt.length - 1],
-          compartments: compartments.classification?.compartments.map((c) => ({ compartmentId: c.compartmentId, topFt: c.topFt, baseFt: c.baseFt })),
-        });
-        warnings.push(...compartments.pressureSystems.warnings);
-      } catch (e) {
-        if (!(e instanceof ShalepointError)) throw e;
-        warnings.push({ code: "W_STUDY_NO_PRESSURE_SYSTEMS", message: `fluid-gradient lines not fitted: ${e.message}` });
-      }
     }
 
     tick(w.id, "uncertainty");
