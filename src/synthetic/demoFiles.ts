@@ -3,6 +3,7 @@
  * convention of io/tables.ts, and the truth (CSV + JSON). Pure string building; the caller
  * decides where to write (see main.ts). Deterministic: same seed → identical text.
  */
+import { buildDemoDrillingData, DEMO_DRILLING_README } from "./demoDrillingData.js";
 import { writeLas } from "../io/writeLas.js";
 import type { LasFile, LasHeaderItem } from "../io/lasTypes.js";
 import { KPA_PER_M_PER_PSI_PER_FT, PSI_PER_FT_PER_GCC, PSI_PER_FT_PER_PPG, psiToKpa } from "../units/index.js";
@@ -389,8 +390,9 @@ function truthJson(logs: DemoWellLogs, rock: DemoRockParameters, seed: number): 
  * @example buildDemoLogFiles().map((f) => f.path)[0] // "README.md"
  */
 export function buildDemoLogFiles(seed: number = DEMO_LOGS_SEED): DemoFile[] {
-  const files: DemoFile[] = [{ path: "README.md", text: DEMO_README }];
+  const files: DemoFile[] = [{ path: "README.md", text: DEMO_README + DEMO_DRILLING_README }];
   for (const d of QUILLON_DEMO_WELLS) files.push(...buildDemoWellFiles(d, QUILLON_ROCK, seed));
+  files.push(buildDemoDrillingData(seed, files.find((f) => f.path === "quillon-a1/mud-weights.csv")!.text));
   return files;
 }
 
