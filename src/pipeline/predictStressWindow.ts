@@ -46,7 +46,9 @@ export interface StressWindowOptions {
   /**
    * Wellbore stability for a vertical well. SHmax is not measured in a planning study, so
    * it is assumed as Shmin + shmaxFraction·(Sv − Shmin): 0 = isotropic horizontal stress,
-   * 1 = SHmax equal to Sv (the normal-faulting limit). Default 0.5 (common practice, no source).
+   * 1 = SHmax equal to Sv (the normal-faulting limit). Default 0: equal horizontal stresses,
+   * the usual assumption for a relaxed passive-margin basin without breakout or image-log
+   * data (common practice, no source).
    * UCS from Horsrud 2001 on shale slowness unless a UCS curve is given.
    */
   wellbore?: {
@@ -182,7 +184,7 @@ export function predictStressWindow(
   let wellbore: StressWindowPrediction["wellbore"];
   if (options.wellbore) {
     const wb = options.wellbore;
-    const f = wb.shmaxFraction ?? 0.5;
+    const f = wb.shmaxFraction ?? 0;
     const shmaxPsi = new Float64Array(n);
     for (let i = 0; i < n; i++) shmaxPsi[i] = shminPsi[i] + f * Math.max(0, svPsi[i] - shminPsi[i]);
     const ucsPsi = wb.ucsPsi ? Float64Array.from(wb.ucsPsi) : ucsFromSlownessHorsrud2001(wb.dtUsPerFt ?? new Float64Array(n).fill(NaN));

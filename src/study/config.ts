@@ -23,6 +23,8 @@ import { UNITS, type UnitId } from "../units/index.js";
 export const STUDY_DEPTH_UNITS = ["ft", "m"] as const;
 /** Gradient units a study file may use (EMW). */
 export const STUDY_GRADIENT_UNITS = ["psi/ft", "kPa/m", "MPa/km", "ppg", "sg"] as const;
+/** Pressure units a study file may use. */
+export const STUDY_PRESSURE_UNITS = ["psi", "kPa", "MPa"] as const;
 /** Velocity units a study file may use. */
 export const STUDY_VELOCITY_UNITS = ["ft/s", "m/s"] as const;
 
@@ -36,6 +38,9 @@ const gradientQuantity = z
 const velocityQuantity = z
   .strictObject({ value: finite.positive(), unit: z.enum(STUDY_VELOCITY_UNITS).describe("ft/s or m/s") })
   .describe("a velocity with its unit, e.g. { \"value\": 5000, \"unit\": \"ft/s\" }");
+const pressureQuantity = z
+  .strictObject({ value: finite.min(0), unit: z.enum(STUDY_PRESSURE_UNITS).describe("psi, kPa or MPa") })
+  .describe("a pressure with its unit, e.g. { \"value\": 300, \"unit\": \"psi\" }");
 const relPath = z.string().min(1).describe("file path, relative to the study file");
 
 const bmlInterval = z
@@ -146,6 +151,35 @@ const fractureSchema = z
   ])
   .describe("fracture (least stress) model: eaton1969, stressRatio or hubbertWillisMin");
 
+const ucsSourceSchema = z
+  .discriminatedUnion("source", [
+    z.strictObject({ source: z.literal("horsrud2001") }).describe("Horsrud 2001 (SPE Drilling & Completion 16(2)) shale correlation on the shale-line slowness"),
+    z.strictObject({ source: z.literal("lal1999") }).describe("Lal 1999 (SPE-54356) shale correlation on the shale-line slowness"),
+    z.strictObject({
+      source: z.literal("curve"),
+      mnemonic: z.string().min(1).describe("LAS mnemonic of a UCS curve (its LAS unit must be a pressure unit: PSI, KPA, MPA)"),
+    }),
+    z.strictObject({
+      source: z.literal("formula"),
+      expression: z.string().min(1).max(500).describe("mathjs expression over LAS mnemonics in shalepoint's internal units (DT µs/ft, RHOB g/cc, …), e.g. \"0.77 * (304.8 / DT) ^ 2.93\""),
+      unit: z.enum(["psi", "MPa"]).describe("unit the expression returns"),
+    }),
+  ])
+  .describe("unconfined compressive strength: a published correlation, a curve, or a local formula");
+
+const wellboreSchema = z
+  .strictObject({
+    shmaxFraction: finite
+      .min(0)
+      .max(1)
+      .optional()
+      .describe("assumed SHmax = Shmin + f·(Sv − Shmin); default 0 (equal horizontal stresses: common practice, no source, for a relaxed basin without breakout data)"),
+    ucs: ucsSourceSchema.optional().describe("default horsrud2001"),
+    internalFriction: finite.min(0).max(1.5).optional().describe("internal friction coefficient μi for Mohr–Coulomb breakout; default 0.6"),
+    tensileStrength: pressureQuantity.optional().describe("rock tensile strength for breakdown; default 0 (conservative)"),
+  })
+  .describe("vertical-well collapse (breakout) and breakdown limits by Kirsch (1898); without it the window uses pore pressure and fracture pressure only");
+
 const wellSchema = z
   .strictObject({
     id: z
@@ -178,6 +212,7 @@ const wellSchema = z
     methods: methodsSchema,
     calibration: calibrationSchema.optional(),
     fracture: fractureSchema,
+    wellbore: wellboreSchema.optional(),
     firstShoeBelowMudline: depthQuantity
       .optional()
       .describe("depth below mudline of the first (structural) casing shoe; casing points are chosen below it; default 1500 ft"),
@@ -586,6 +621,11 @@ export function studyDepthFt(q: { value: number; unit: (typeof STUDY_DEPTH_UNITS
 
 /** Convert a `{ value, unit }` gradient to psi/ft. */
 export function studyGradientPsiPerFt(q: { value: number; unit: (typeof STUDY_GRADIENT_UNITS)[number] }): number {
+  return q.value * UNITS[q.unit as UnitId].factor;
+}
+
+/** Convert a `{ value, unit }` pressure to psi. */
+export function studyPressurePsi(q: { value: number; unit: (typeof STUDY_PRESSURE_UNITS)[number] }): number {
   return q.value * UNITS[q.unit as UnitId].factor;
 }
 

@@ -20,7 +20,7 @@ import {
   readMudWeights,
 } from "../io/tables.js";
 import { parseTrendFile } from "../io/trendFile.js";
-import { parseLasUnit, UNITS } from "../units/index.js";
+import { mpaToPsi, parseLasUnit, quantityOf, UNITS } from "../units/index.js";
 import { summarizeLogQc } from "../logs/summarizeLogQc.js";
 import {
   predictPorePressure,
@@ -28,7 +28,9 @@ import {
   type PorePressurePredictionOptions,
   type TrendChoice,
 } from "../pipeline/predictPorePressure.js";
-import { predictStressWindow, type FractureMethodChoice, type StressWindowPrediction } from "../pipeline/predictStressWindow.js";
+import { predictStressWindow, type FractureMethodChoice, type StressWindowOptions, type StressWindowPrediction } from "../pipeline/predictStressWindow.js";
+import { ucsFromSlownessHorsrud2001, ucsFromSlownessLal1999 } from "../stress/ucsCorrelations.js";
+import { compileCurveFormula } from "../formula/compileCurveFormula.js";
 import type { PressureObservation, MisfitTable } from "../porepressure/misfitTable.js";
 import { porePressureMisfitTable } from "../porepressure/misfitTable.js";
 import type { StressTestPoint } from "../stress/fractureCalibration.js";
@@ -37,7 +39,7 @@ import { predictCompartments } from "../pipeline/predictCompartments.js";
 import { simulatePressureUncertainty, type PressureUncertaintyResult } from "../uncertainty/simulatePressureUncertainty.js";
 import type { CompactionTrendKind } from "../trend/trendTypes.js";
 import type { StudyFinding, StudyProvenance, WellReportInput } from "../present/report/reportTypes.js";
-import { studyDepthFt, studyGradientPsiPerFt, studyVelocityFtPerS, type StudyConfig, type StudyConfigFile } from "./config.js";
+import { studyDepthFt, studyGradientPsiPerFt, studyPressurePsi, studyVelocityFtPerS, type StudyConfig, type StudyConfigFile } from "./config.js";
 import { readInputText, type InputText } from "./readInputFile.js";
 import { shalepointVersion } from "./packageVersion.js";
 
@@ -180,6 +182,57 @@ function hydrostaticFromLas(las: { parameters: { mnemonic: string; unit: string;
     throw new ShalepointError("E_CONFIG", "~P HYDG needs a gradient unit and a number", { file, line: item.line, param: "HYDG", value: `${item.value} ${item.unit}`, allowed: "PSI/FT, KPA/M, PPG, SG" });
   }
   return v * UNITS[id].factor;
+}
+
+/**
+ * Wellbore-stability inputs of one well from its study settings: UCS from a published
+ * correlation on the shale-line slowness (Horsrud 2001 by default, or Lal 1999), from a
+ * UCS curve in the LAS file, or from the user's own formula over LAS mnemonics (compiled
+ * once by src/formula, evaluated over the curves in internal units; non-finite results are
+ * set to NaN and counted in a warning).
+ */
+function wellboreOptions(
+  wb: NonNullable<StudyConfigFile["wells"][number]["wellbore"]>,
+  well: Well,
+  prediction: PorePressurePrediction,
+  warnings: Warning[],
+): NonNullable<StressWindowOptions["wellbore"]> {
+  const dt = prediction.shaleLine.dtUsPerFt ?? new Float64Array(prediction.tvdFt.length).fill(NaN);
+  const ucs = wb.ucs ?? { source: "horsrud2001" as const };
+  let ucsPsi: Float64Array;
+  if (ucs.source === "horsrud2001") {
+    ucsPsi = ucsFromSlownessHorsrud2001(dt);
+  } else if (ucs.source === "lal1999") {
+    ucsPsi = ucsFromSlownessLal1999(dt);
+  } else {
+    const byMnemonic: Record<string, Float64Array> = {};
+    for (const c of Object.values(well.curves)) byMnemonic[c.mnemonic] = c.values;
+    if (ucs.source === "curve") {
+      const c = Object.values(well.curves).find((x) => x.mnemonic === ucs.mnemonic);
+      if (c === undefined || quantityOf(c.unit) !== "pressure") {
+        throw new ShalepointError("E_CONFIG", `wellbore.ucs.mnemonic: no pressure-unit curve '${ucs.mnemonic}' in the well`, {
+          param: "wellbore.ucs.mnemonic",
+          value: ucs.mnemonic,
+          allowed: Object.values(well.curves).filter((x) => quantityOf(x.unit) === "pressure").map((x) => x.mnemonic).join(", ") || "none in this file",
+        });
+      }
+      ucsPsi = Float64Array.from(c.values);
+    } else {
+      const formula = compileCurveFormula({ expression: ucs.expression, availableNames: Object.keys(byMnemonic) });
+      const r = formula.evaluate({ curves: byMnemonic, nonFinite: "flag" });
+      const k = ucs.unit === "MPa" ? mpaToPsi(1) : 1;
+      ucsPsi = r.values.map((v) => v * k);
+      if (r.nonFiniteIndices.length > 0) {
+        warnings.push({ code: "W_UCS_FORMULA_NON_FINITE", message: `UCS formula gave a non-finite value at ${r.nonFiniteIndices.length} samples (set to NaN)`, count: r.nonFiniteIndices.length, index: r.nonFiniteIndices[0] });
+      }
+    }
+  }
+  return {
+    shmaxFraction: wb.shmaxFraction,
+    ucsPsi,
+    internalFriction: wb.internalFriction,
+    tensileStrengthPsi: wb.tensileStrength ? studyPressurePsi(wb.tensileStrength) : undefined,
+  };
 }
 
 /**
@@ -334,6 +387,7 @@ export function runStudy(config: StudyConfig, options: RunStudyOptions = {}): St
         frictionCoefficient: f.frictionCoefficient,
         margins: f.margins,
         firstShoeTvdFt: mudline + (w.firstShoeBelowMudline ? studyDepthFt(w.firstShoeBelowMudline) : 1500),
+        wellbore: w.wellbore ? wellboreOptions(w.wellbore, well, prediction, warnings) : undefined,
       },
     );
     warnings.push(...stressWindow.warnings);

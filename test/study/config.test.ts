@@ -147,3 +147,16 @@ describe("study unit conversions", () => {
     expect(formatKeyPath(["wells", 1, "methods", "eatonSonic", "exponent"])).toBe("wells[1].methods.eatonSonic.exponent");
   });
 });
+
+describe("study wellbore settings", () => {
+  it("accepts the UCS sources and refuses an unknown one with its key path", async () => {
+    const { parseStudyConfig } = await import("../../src/study/config.js");
+    const base = JSON.parse(readFileSync(new URL("../../demo-logs/demo-study.json", import.meta.url), "utf8"));
+    base.wells[0].wellbore = { ucs: { source: "formula", expression: "0.77 * (304.8 / DT) ^ 2.93", unit: "MPa" }, shmaxFraction: 0.2 };
+    expect(parseStudyConfig(base).wells[0].wellbore?.ucs?.source).toBe("formula");
+    base.wells[0].wellbore = { ucs: { source: "guess" } };
+    expect(() => parseStudyConfig(base)).toThrow(/wells\[0\]\.wellbore\.ucs/);
+    base.wells[0].wellbore = { shmaxFraction: 1.5 };
+    expect(() => parseStudyConfig(base)).toThrow(/wells\[0\]\.wellbore\.shmaxFraction/);
+  });
+});
