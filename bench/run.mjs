@@ -230,6 +230,24 @@ const machine = {
 console.log(`machine: ${machine.cpu}, ${machine.cores} cores, ${machine.memoryGb.toFixed(1)} GB, Node ${machine.node}`);
 const loadStart = os.loadavg();
 for (const n of [40000, 200000]) await benchSize(n);
+// Demo study end to end: the CLI in a fresh process (three demo wells, outputs and report
+// written to a temporary folder outside the repository), timed from spawn to exit.
+if (want("demo") && fs.existsSync(path.join(root, "dist/cli/main.js")) && fs.existsSync(path.join(root, "demo-logs/demo-study.json"))) {
+  for (const variant of [{ name: "demo study end to end (CLI demo, report + PNG chart)", extra: [] }, { name: "demo study end to end (CLI demo, report, no PNG)", extra: ["--no-png"] }]) {
+    const m = await measure(() => {
+      const out = fs.mkdtempSync(path.join(os.tmpdir(), "shalepoint-bench-demo-"));
+      try {
+        const r = spawnSync(process.execPath, [path.join(root, "dist/cli/main.js"), "demo", "--out", path.join(out, "o"), "--quiet", ...variant.extra], { encoding: "utf8" });
+        if (r.status !== 0) throw new Error(`demo failed (${r.status}): ${r.stderr}`);
+        if (!fs.existsSync(path.join(out, "o", "report.html"))) throw new Error("demo wrote no report.html");
+        return { ok: 1 };
+      } finally {
+        fs.rmSync(out, { recursive: true, force: true });
+      }
+    }, { warmup: 0, runs: 3, minMs: 0 });
+    record(variant.name, 3, m);
+  }
+}
 let memory = null;
 if (want("memory")) {
   memory = { idle: probe("idle", 200000), pipeline: probe("pipeline", 200000) };
