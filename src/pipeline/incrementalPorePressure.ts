@@ -317,11 +317,17 @@ function updateTrend(
   mudlineFt: number,
   bmlFt: Float64Array,
   nOld: number,
+  keptAboveBmlFt: number,
 ): { outcome?: TrendOutcome; from: number } {
   if (choice === undefined || old === undefined || pointValues === undefined) return { outcome: undefined, from: bmlFt.length };
   let fitted: { trend: TrendOutcome["trend"]; diagnostics: TrendOutcome["diagnostics"] };
+  // Points shallower than the cut are the old ones: when every fit interval ends above the
+  // cut, the fit sees the same points as before and its result cannot change.
+  const deepestBaseBmlFt = choice.use === "fit" ? Math.max(...choice.segments.flatMap((sg) => sg.intervals.map((iv) => iv.baseBmlFt))) : Infinity;
   if (choice.use === "given") {
     fitted = { trend: choice.trend, diagnostics: [] };
+  } else if (deepestBaseBmlFt < keptAboveBmlFt) {
+    fitted = { trend: old.trend, diagnostics: old.diagnostics };
   } else {
     const pointBml = new Float64Array(pick.points.tvdFt.length);
     for (let k = 0; k < pointBml.length; k++) pointBml[k] = pick.points.tvdFt[k] - mudlineFt;
@@ -367,7 +373,12 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   if (n === nOld) return { ...state, well, recomputedFromIndex: n };
   const despike = options.despike ?? true;
   const tvdFt = Float64Array.from(well.tvdFt);
-  const { tvdssFt, bmlFt } = depthReferenceArrays({ tvdFt, datums: well.datums });
+  // pointwise: only the new samples
+  const tail = depthReferenceArrays({ tvdFt: tvdFt.subarray(nOld), datums: well.datums });
+  const tvdssFt = grow(old.tvdssFt, n);
+  tvdssFt.set(tail.tvdssFt, nOld);
+  const bmlFt = grow(old.bmlFt, n);
+  bmlFt.set(tail.bmlFt, nOld);
   const mudline = mudlineTvdFt(well.datums);
   const raw = (role: string): Float64Array | undefined => well.curves[role]?.values;
   const cleanFrom = Math.max(0, nOld - DESPIKE_HALF);
@@ -409,8 +420,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     from = Math.min(from, r.from);
   }
 
-  const sonic = updateTrend(old.sonicTrend, options.sonicTrend, shale, shale.points.values.dt, mudline, bmlFt, nOld);
-  const resistivity = updateTrend(old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld);
+  const sonic = updateTrend(old.sonicTrend, options.sonicTrend, shale, shale.points.values.dt, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
+  const resistivity = updateTrend(old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
 
   const methods: PorePressurePrediction["methods"] = {};
   const sub = (a: Float64Array, f: number): Float64Array => a.subarray(f);
