@@ -17,6 +17,7 @@ import { runStudy, type StudyProgress } from "../study/runStudy.js";
 import { writeStudyOutputs } from "../study/writeStudyOutputs.js";
 import { shalepointPackageRoot, shalepointVersion } from "../study/packageVersion.js";
 import { inspectInputFile } from "./inspectInputFile.js";
+import { runFollowCommand, FOLLOW_HELP } from "./followCommand.js";
 
 /** Exit codes of the CLI. */
 export const CLI_EXIT = { ok: 0, unexpected: 1, badInput: 2, criticalFindings: 3 } as const;
@@ -49,6 +50,7 @@ Commands:
   demo                    run the demo study on the three invented Quillon Basin wells
   inspect <file>          check a LAS 2.0 or CSV file: what was found and what is wrong
   pick                    start the local trend-picking page for one well
+  follow <study.json>     while drilling: append new log chunks from a folder, refresh the outputs
 
 Options:
   --help, -h              help (also: shalepoint <command> --help)
@@ -75,6 +77,9 @@ Reads one file and prints what was found (header, datums, curves with units, nul
 and ranges; or the table kind, columns and rows) and what is wrong (errors with line and
 column, warnings). Files above the size limit (default 500 MB) or holding NUL bytes are
 refused before they are read.
+
+${EXIT_TEXT}`,
+  follow: `${FOLLOW_HELP}
 
 ${EXIT_TEXT}`,
   pick: `shalepoint pick (--well-dir <folder> | --las <file.las>) [--trend <trend.json>] [--port N]
@@ -224,8 +229,12 @@ export async function main(argv: readonly string[], io: CliIo = defaultIo()): Pr
         await runPickerCommand(rest.filter((a) => a !== "--quiet" && a !== "-q"), { out: (l) => (l === SAFETY_CAUTION_TEXT ? undefined : io.out(l)) });
         return CLI_EXIT.ok;
       }
+      case "follow": {
+        caution();
+        return await runFollowCommand(rest.filter((a) => a !== "--quiet" && a !== "-q"), io);
+      }
       default:
-        throw new ShalepointError("E_USAGE", `unknown command '${command}'`, { value: command, allowed: "run, demo, inspect, pick", hint: "shalepoint --help" });
+        throw new ShalepointError("E_USAGE", `unknown command '${command}'`, { value: command, allowed: "run, demo, inspect, pick, follow", hint: "shalepoint --help" });
     }
   } catch (e) {
     if (e instanceof ShalepointError) {
