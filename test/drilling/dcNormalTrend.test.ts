@@ -29,6 +29,12 @@ describe("fitDcNormalTrend", () => {
     expect(evaluateDcNormalTrend({ trend: g.trend, bmlFt: [6000] })[0] * 100).toBeCloseTo(122.5, 1);
   });
 
+  it("doc example: three points on 0.8·e^(5e-5·Z) give dcAtMudline 0.8 and rate 5e-5 (own case)", () => {
+    const fit = fitDcNormalTrend({ bmlFt: [0, 1000, 2000], dc: [0.8, 0.8 * Math.exp(0.05), 0.8 * Math.exp(0.1)], intervals: [{ topBmlFt: 0, baseBmlFt: 2000 }] });
+    expect(fit.trend.dcAtMudline).toBeCloseTo(0.8, 12);
+    expect(fit.trend.ratePerFt).toBeCloseTo(5e-5, 15);
+  });
+
   it("throws E_TOO_FEW_POINTS with fewer than 3 samples or one depth", () => {
     expect(() => fitDcNormalTrend({ bmlFt: [1, 2], dc: [1, 1], intervals: [{ topBmlFt: 0, baseBmlFt: 5 }] })).toThrow(expect.objectContaining({ code: "E_TOO_FEW_POINTS" }));
     expect(() => fitDcNormalTrend({ bmlFt: [1, 1, 1], dc: [1, 2, 3], intervals: [{ topBmlFt: 0, baseBmlFt: 5 }] })).toThrow(expect.objectContaining({ code: "E_TOO_FEW_POINTS" }));

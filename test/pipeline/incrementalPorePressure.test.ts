@@ -125,6 +125,28 @@ describe("appendDepthSamples", () => {
     expectSame(state.prediction, fullFrozen);
   });
 
+  it("Marten B-1 (metric files, Bowers with an unloading zone): appending below the onset equals the full run", () => {
+    const b1 = loadDemoWell("marten-b1");
+    const m = 1 / 0.3048; // ft per m (exact definition)
+    const opts: PorePressurePredictionOptions = {
+      hydrostaticGradientPsiPerFt: b1.hydrostaticPsiPerFt,
+      shale: { criterion: { kind: "grCutoff", cutoffApi: 85 } },
+      sonicTrend: { use: "fit", kind: "sonicExponential", segments: [{ topBmlFt: 0, dtMatrixUsPerFt: 65, intervals: [{ topBmlFt: 400 * m, baseBmlFt: 1650 * m }] }] },
+      eatonSonic: {},
+      bowers: { a: 10, b: 0.75, unloading: { onsetTvdFt: 3780 * m, u: 3.5 } },
+      primary: "bowers",
+    };
+    const fullB1 = predictPorePressure(b1.well, opts);
+    const nB = b1.well.tvdFt.length;
+    let start = 0;
+    while (b1.well.tvdFt[start] < 3780 * m + 300) start++;
+    let state = startWhileDrilling(head(b1.well, start), opts);
+    state = appendDepthSamples(state, chunk(b1.well, start, start + 700));
+    state = appendDepthSamples(state, chunk(b1.well, start + 700, nB));
+    expect(state.prediction.methods.bowers!.vmaxFtPerS).toBe(fullB1.methods.bowers!.vmaxFtPerS);
+    expectSame(state.prediction, fullB1);
+  });
+
   it("rejects samples above the current end and calibration refits", () => {
     const state = startWhileDrilling(head(a1.well, 20000), optionsFor());
     expect(() => appendDepthSamples(state, chunk(a1.well, 19990, 20010))).toThrow(/below the current end/);
