@@ -21,6 +21,12 @@ import { readLas } from "../io/readLas.js";
 import { writeLas } from "../io/writeLas.js";
 import type { LasFile } from "../io/lasTypes.js";
 import { readDrillingData } from "../io/drillingData.js";
+import { readDrillingEvents } from "../io/tables.js";
+import { UNITS } from "../units/index.js";
+import { predictDcPorePressure } from "../pipeline/incrementalDrillingPorePressure.js";
+import { compareMudWeightToPorePressure } from "../drilling/mudWeightMargin.js";
+import { SAFETY_CAUTION_TEXT } from "../present/caution.js";
+import type { StudyResult } from "../study/runStudy.js";
 import { loadStudyConfig, type StudyConfig } from "../study/config.js";
 import { runStudy } from "../study/runStudy.js";
 import { writeStudyOutputs, writeFileAtomic } from "../study/writeStudyOutputs.js";
@@ -42,6 +48,8 @@ export interface FollowOptions {
   once: boolean;
   report: boolean;
   chartPng: boolean;
+  /** Margin below which a drilling-data row is flagged, ppg (default 0.2). */
+  minMarginPpg: number;
 }
 
 /** What one pass over the watched folder did. */
@@ -63,7 +71,10 @@ While drilling: watches <folder> for new LAS chunks of well <id> (same curves as
 LAS, deeper samples only) and drilling-data CSV chunks, appends them in file-name order and
 refreshes the study's outputs and report after each new file. --once processes the files
 present and stops; otherwise the folder is checked every --poll-s seconds (default 5) until
-Ctrl+C.`;
+Ctrl+C. With drilling data, <out>/while-drilling/<id>.while-drilling.csv gets the corrected
+d-exponent, its pore pressure (Eaton's dc form, trend fitted on the study's sonic-trend
+intervals), the log pore pressure, the mud weight and the rows whose margin is below
+--min-margin-ppg (default 0.2).`;
 
 /**
  * Parse the follow command's arguments.
@@ -76,7 +87,7 @@ export function parseFollowArgs(args: readonly string[]): FollowOptions {
   const positional: string[] = [];
   const values: Record<string, string> = {};
   const flags = new Set<string>();
-  const valueOptions = ["--well", "--watch", "--out", "--poll-s"];
+  const valueOptions = ["--well", "--watch", "--out", "--poll-s", "--min-margin-ppg"];
   const flagOptions = ["--once", "--no-report", "--no-png", "--quiet", "-q"];
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
@@ -96,7 +107,12 @@ export function parseFollowArgs(args: readonly string[]): FollowOptions {
   if (!(Number.isFinite(poll) && poll >= 0.2 && poll <= 3600)) {
     throw new ShalepointError("E_USAGE", "--poll-s must be a number of seconds from 0.2 to 3600", { param: "--poll-s", value: values["--poll-s"] });
   }
+  const minMarginPpg = values["--min-margin-ppg"] === undefined ? 0.2 : Number(values["--min-margin-ppg"]);
+  if (!(Number.isFinite(minMarginPpg) && minMarginPpg >= 0 && minMarginPpg <= 3)) {
+    throw new ShalepointError("E_USAGE", "--min-margin-ppg must be a number of ppg from 0 to 3", { param: "--min-margin-ppg", value: values["--min-margin-ppg"] });
+  }
   return {
+    minMarginPpg,
     studyPath: positional[0],
     wellId: values["--well"],
     watchDir: values["--watch"],
@@ -119,6 +135,8 @@ export interface FollowSession {
   /** Size of each pending file at the last pass (a file is read once its size is stable). */
   pendingSize: Map<string, number>;
   workDir: string;
+  /** The last study run (after the latest refresh). */
+  lastResult?: StudyResult;
 }
 
 /**
@@ -235,12 +253,13 @@ export async function followOnce(session: FollowSession, io: FollowIo, options: 
     mkdirSync(session.workDir, { recursive: true });
     const id = o.wellId;
     if (session.drillingCsv) writeFileAtomic(join(session.workDir, `${id}.drilling-data.csv`), session.drillingCsv.text);
-    if (lasChanged) {
+    if (lasChanged || session.lastResult === undefined) {
       const lasPath = join(session.workDir, `${id}.las`);
       writeFileAtomic(lasPath, writeLas(session.las));
       const wellPaths = session.config.wellPaths.map((p, i) => (i === session.wellIndex ? { ...p, las: lasPath } : p));
       const result = runStudy({ ...session.config, wellPaths });
       const files = await writeStudyOutputs(result, session.config.outDir, { report: o.report ? undefined : false, chartPng: o.chartPng ? undefined : false });
+      session.lastResult = result;
       refreshed = true;
       const w = result.wells[session.wellIndex];
       const n = w.prediction.tvdFt.length;
@@ -248,12 +267,73 @@ export async function followOnce(session: FollowSession, io: FollowIo, options: 
       while (k > 0 && !Number.isFinite(w.prediction.ppPsi[k])) k--;
       const ppg = w.prediction.ppPsi[k] / (w.prediction.tvdFt[k] * (12 / 231));
       io.out(`follow: ${appended.join(", ")} → ${id} to ${w.prediction.tvdFt[n - 1].toFixed(1)} ft TVD; pore pressure ${ppg.toFixed(2)} ppg at ${w.prediction.tvdFt[k].toFixed(1)} ft; outputs refreshed in ${files.outDir}`);
-    } else {
-      io.out(`follow: ${appended.join(", ")} → drilling data to ${session.drillingCsv!.lastTvdFt.toFixed(1)} ft TVD`);
+    }
+    if (session.drillingCsv) {
+      const summary = writeDrillingComparison(session, session.lastResult!);
+      io.out(`follow: drilling data to ${session.drillingCsv.lastTvdFt.toFixed(1)} ft TVD; ${summary}`);
     }
   }
   const idx = session.las.data[0];
   return { appended, refused, lastIndex: idx.length > 0 ? idx[idx.length - 1] : NaN, refreshed };
+}
+
+function nearestSample(tvdFt: Float64Array, z: number): number {
+  let lo = 0;
+  let hi = tvdFt.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (tvdFt[mid] <= z) lo = mid;
+    else hi = mid;
+  }
+  return Math.abs(tvdFt[hi] - z) < Math.abs(tvdFt[lo] - z) ? hi : lo;
+}
+
+/**
+ * d-exponent pore pressure and the mud-weight comparison on the drilling data so far, written
+ * to `<id>.while-drilling.csv` (caution first). Rows below the logged depth get no log values.
+ * The dc trend is fitted on the study's sonic-trend intervals (the normally pressured shale the
+ * user chose); without fit intervals in the study the dc columns are left out.
+ */
+function writeDrillingComparison(session: FollowSession, result: StudyResult): string {
+  const { data } = readDrillingData(session.drillingCsv!.text, { file: `${session.options.wellId}.drilling-data.csv` });
+  const w = result.wells[session.wellIndex];
+  const p = w.prediction;
+  const last = p.tvdFt[p.tvdFt.length - 1];
+  const idx = Array.from(data.tvdFt, (z) => (z <= last + 1 ? nearestSample(p.tvdFt, z) : -1));
+  const pick = (a: ArrayLike<number>): Float64Array => Float64Array.from(idx, (i) => (i >= 0 ? a[i] : NaN));
+  const ppLogs = pick(p.ppPsi);
+  const sonic = session.config.file.wells[session.wellIndex].methods.sonicTrend;
+  let ppDc: Float64Array | undefined;
+  let note = "";
+  if (sonic && "fitIntervals" in sonic) {
+    try {
+      const intervals = sonic.fitIntervals.map((iv) => ({ topBmlFt: iv.top * UNITS[iv.unit].factor, baseBmlFt: iv.base * UNITS[iv.unit].factor }));
+      ppDc = predictDcPorePressure(data, { isShale: Float64Array.from(idx, (i) => (i >= 0 ? p.shale.isShale[i] : 0)), overburdenPsi: pick(p.overburden.svPsi) }, {
+        datums: w.well.datums,
+        hydrostaticGradientPsiPerFt: w.hydrostaticGradientPsiPerFt,
+        trend: { use: "fit", intervals },
+      }).ppPsi;
+    } catch (e) {
+      note = `; dc pore pressure not computed (${e instanceof ShalepointError ? e.code : "error"}: ${(e as Error).message})`;
+    }
+  } else note = "; dc pore pressure not computed (the study's sonic trend has no fit intervals)";
+  const eventsPath = session.config.wellPaths[session.wellIndex].drillingEvents;
+  const shows = eventsPath ? readDrillingEvents(readFileSync(eventsPath, "utf8"), { file: basename(eventsPath) }).records : [];
+  const cmp = compareMudWeightToPorePressure({
+    tvdFt: data.tvdFt,
+    ppPsi: ppLogs,
+    mudWeightPsiPerFt: data.mudWeightPsiPerFt,
+    minMarginPpg: session.options.minMarginPpg,
+    shows: shows.map((s) => ({ tvdFt: s.tvdFt, event: s.event, emwPsiPerFt: s.emwPsiPerFt, gasUnits: s.gasUnits })),
+  });
+  const ppg = (psi: number, z: number): number => psi / (z * (12 / 231));
+  const fmt = (v: number): string => (Number.isFinite(v) ? String(Math.round(v * 1e4) / 1e4) : "");
+  const rows = Array.from(data.tvdFt, (z, i) =>
+    [z, ppDc ? ppg(ppDc[i], z) : NaN, cmp.ppEmwPpg[i], cmp.mudWeightPpg[i], cmp.marginPpg[i]].map(fmt).join(",") + `,${cmp.lowMargin[i]}`,
+  );
+  const text = `# ${SAFETY_CAUTION_TEXT}\ntvd_ft,pp_dc_ppg,pp_logs_ppg,mud_weight_ppg,margin_ppg,low_margin\n${rows.join("\n")}\n`;
+  writeFileAtomic(join(session.workDir, `${session.options.wellId}.while-drilling.csv`), text);
+  return `${cmp.runs.length} low-margin interval(s) below ${session.options.minMarginPpg} ppg, ${cmp.missedShowCount} kick/gas show(s) not near one${note}`;
 }
 
 /**

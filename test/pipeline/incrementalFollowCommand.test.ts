@@ -52,18 +52,37 @@ describe("followOnce", () => {
       writeFileSync(join(incoming, "chunk-002.las"), cut(las, b, n));
       writeFileSync(join(incoming, "chunk-001.las"), cut(las, a, b));
       writeFileSync(join(incoming, "chunk-003-overlap.las"), cut(las, n - 10, n));
+      // Drilling data in two chunks (header repeated), then a chunk that goes back up the hole.
+      const drill = readFileSync(join(DEMO, "quillon-a1", "drilling-data.csv"), "utf8").trim().split("\n");
+      writeFileSync(join(incoming, "drill-001.csv"), [drill[0], ...drill.slice(1, 3001)].join("\n") + "\n");
+      writeFileSync(join(incoming, "drill-002.csv"), [drill[0], ...drill.slice(3001)].join("\n") + "\n");
+      writeFileSync(join(incoming, "drill-003-back.csv"), [drill[0], drill[10]].join("\n") + "\n");
 
       const session = openFollowSession(parseFollowArgs([join(dir, "study.json"), "--well", "quillon-a1", "--watch", incoming, "--once", "--no-png", "--no-report"]));
       const lines: string[] = [];
       const errs: string[] = [];
       const pass = await followOnce(session, { out: (l) => lines.push(l), err: (l) => errs.push(l) });
-      expect(pass.appended).toEqual(["chunk-001.las", "chunk-002.las"]); // file-name order, not write order
-      expect(pass.refused.map((r) => r.file)).toEqual(["chunk-003-overlap.las"]);
-      expect(pass.refused[0].reason).toMatch(/^E_FOLLOW_DEPTH/);
+      expect(pass.appended).toEqual(["chunk-001.las", "chunk-002.las", "drill-001.csv", "drill-002.csv"]); // file-name order, not write order
+      expect(pass.refused.map((r) => r.file)).toEqual(["chunk-003-overlap.las", "drill-003-back.csv"]);
+      expect(pass.refused.map((r) => r.reason.slice(0, 14))).toEqual(["E_FOLLOW_DEPTH", "E_FOLLOW_DEPTH"]);
       expect(pass.lastIndex).toBe(las.data[0][n - 1]);
       expect(pass.refreshed).toBe(true);
       expect(existsSync(join(dir, "out", "while-drilling", "quillon-a1.las"))).toBe(true);
-      expect(lines.length).toBe(1);
+      expect(lines.length).toBe(2); // the refresh line and the drilling-data line
+
+      // The drilling-data comparison: caution first, one row per drilling-data row, the log pore
+      // pressure read at the same depth as the study's own result (own case, same numbers).
+      const cmp = readFileSync(join(dir, "out", "while-drilling", "quillon-a1.while-drilling.csv"), "utf8").trim().split("\n");
+      expect(cmp[0]).toMatch(/^# .*estimates for trained engineers/);
+      expect(cmp[1]).toBe("tvd_ft,pp_dc_ppg,pp_logs_ppg,mud_weight_ppg,margin_ppg,low_margin");
+      expect(cmp.length).toBe(2 + drill.length - 1);
+      const result = session.lastResult!.wells[0].prediction;
+      const row = cmp[2 + 2500].split(",").map(Number); // 10,000 ft TVD (5,000 + 2 × 2,500)
+      expect(row[0]).toBe(10000);
+      let k = 0;
+      while (result.tvdFt[k] < 10000) k++;
+      expect(row[2]).toBeCloseTo(result.ppPsi[k] / (10000 * (12 / 231)), 4); // written to 4 decimals
+      expect(row[1]).toBeGreaterThan(8); // dc pore pressure present (ppg)
 
       // A second pass with nothing new does nothing.
       const again = await followOnce(session, { out: (l) => lines.push(l), err: (l) => errs.push(l) });
