@@ -444,11 +444,13 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   if (options.bowers && shaleLine.dtUsPerFt) {
     const { a, b, v0FtPerS } = options.bowers;
     let unloading = options.bowers.unloading;
-    const velocity = velocityFromSlownessLog(shaleLine.dtUsPerFt);
     // Vmax is read once on the whole velocity log (as the full run does), then passed explicitly.
-    if (unloading && unloading.vmaxFtPerS === undefined) unloading = { ...unloading, vmaxFtPerS: velocityAtDepth(tvdFt, velocity, unloading.onsetTvdFt) };
+    if (unloading && unloading.vmaxFtPerS === undefined) {
+      unloading = { ...unloading, vmaxFtPerS: velocityAtDepth(tvdFt, velocityFromSlownessLog(shaleLine.dtUsPerFt), unloading.onsetTvdFt) };
+    }
     const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
-    const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: sub(velocity, f), tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
+    const velocity = velocityFromSlownessLog(sub(shaleLine.dtUsPerFt, f));
+    const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: velocity, tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
     const r = spliceResult(old.methods.bowers, tail, f, n);
     const es = f > 0 && old.methods.bowers ? grow(old.methods.bowers.effectiveStressPsi, n) : new Float64Array(n);
     es.set(tail.effectiveStressPsi, f);
