@@ -167,6 +167,15 @@ async function benchSize(n) {
       return sp.predictStressWindow({ tvdFt: p.tvdFt, ppPsi: p.ppPsi, svPsi: p.overburden.svPsi }, { ...so, wellbore: { ...so.wellbore, dtUsPerFt: p.shaleLine.dtUsPerFt } });
     }));
   }
+  if (want("append") && n === 40000 && typeof sp.appendDepthSamples === "function") {
+    // While drilling: 500 new samples below a 40,000-sample well, every curve refreshed.
+    const big = generateBenchWell({ samples: n + 500 }).well;
+    const cut = (a, from, to) => a.slice(from, to);
+    const head = { ...big, mdFt: cut(big.mdFt, 0, n), tvdFt: cut(big.tvdFt, 0, n), curves: Object.fromEntries(Object.entries(big.curves).map(([k, c]) => [k, { ...c, values: cut(c.values, 0, n) }])) };
+    const chunk = { mdFt: cut(big.mdFt, n, n + 500), tvdFt: cut(big.tvdFt, n, n + 500), curves: Object.fromEntries(Object.entries(big.curves).map(([k, c]) => [k, cut(c.values, n, n + 500)])) };
+    const state = sp.startWhileDrilling(head, options);
+    record("append 500 samples + refresh (appendDepthSamples)", n, await measure(() => sp.appendDepthSamples(state, chunk)));
+  }
   if (want("segment") && typeof sp.segmentPressureProfile === "function") {
     record("segmentation (segmentPressureProfile)", n, await measure(() => sp.segmentPressureProfile({ tvdFt, ppPsi: base.ppPsi, hydrostaticPsi: base.hydrostaticPsi }), { runs: 7, warmup: 1 }));
   }
