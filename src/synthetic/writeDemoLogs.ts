@@ -11,7 +11,7 @@ import { buildDemoLogFiles, DEMO_LOGS_SEED } from "./demoFiles.js";
  * @param outDir target folder, e.g. `demo-logs`
  * @param seed PRNG seed, default {@link DEMO_LOGS_SEED}
  * @returns the relative paths written, in order
- * @example writeDemoLogs("demo-logs").length // 26
+ * @example writeDemoLogs("demo-logs").length // 27
  */
 export function writeDemoLogs(outDir: string, seed: number = DEMO_LOGS_SEED): string[] {
   const files = buildDemoLogFiles(seed);
