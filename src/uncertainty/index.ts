@@ -9,4 +9,5 @@ export * from "./xoshiro128Random.js";
 export * from "./drawParameterSamples.js";
 export * from "./drawCorrelatedPairs.js";
 export * from "./quantilesType7.js";
+export * from "./carriedOrderQuantiles.js";
 export * from "./simulatePressureUncertainty.js";

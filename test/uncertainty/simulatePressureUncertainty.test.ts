@@ -282,3 +282,85 @@ describe("simulatePressureUncertainty — missing data and errors", () => {
     expect(() => simulatePressureUncertainty({ ...ok, porePressure: { ...ok.porePressure, trendCovariance: [{ interceptVar: 1, slopeVar: 1, interceptSlopeCov: 2 }] } as never })).toThrow(code("E_RANGE"));
   });
 });
+
+describe("simulatePressureUncertainty — exponential-to-matrix trend stepped in depth", () => {
+  // 300 depths cross four anchor blocks of 64; the step is 0.5 ft with a few irregular steps
+  // (0.5000001, 0.7, 30 ft) and a missing sample, so every path of the depth stepping runs.
+  const D = 300;
+  const bml: number[] = [];
+  let zRun = 4000;
+  for (let i = 0; i < D; i++) {
+    bml.push(zRun);
+    zRun += i === 40 ? 0.5000001 : i === 100 ? 0.7 : i === 200 ? 30 : 0.5;
+  }
+  const tvd = bml.map((z) => z + 5082);
+  const obs = bml.map((z, i) => (i === 150 ? NaN : 65 + 135 * Math.exp(-3e-4 * z) * (1 + 0.2 * Math.sin(i / 30))));
+  const trend: CompactionTrend = { kind: "sonicExponential", segments: [
+    { topBmlFt: 0, params: { dtMatrixUsPerFt: 65, dtMudlineUsPerFt: 200, decayPerFt: 3e-4 }, fittedOn: null },
+  ] };
+  const input: PressureUncertaintyInput = freezeAll({
+    tvdFt: Object.freeze(tvd) as number[], bmlFt: Object.freeze(bml) as number[],
+    overburdenPsi: Object.freeze(tvd.map((t) => 0.95 * t)) as number[], hydrostaticPsi: Object.freeze(tvd.map((t) => 0.465 * t)) as number[],
+    observed: Object.freeze(obs) as number[],
+    overburdenFactor: Object.freeze({ kind: "normal", mean: 1, std: 0.02 }) as never,
+    porePressure: {
+      kind: "eaton", exponent: { kind: "normal", mean: 3, std: 0.3 }, trend,
+      trendCovariance: [{ interceptVar: 4e-4, slopeVar: 4e-10, interceptSlopeCov: -2e-7 }],
+    },
+    fracture: { kind: "eaton1969", poissonRatio: { kind: "truncatedNormal", mean: 0.42, std: 0.03, min: 0.3, max: 0.49 } },
+    realisations: 11, seed: 99,
+  });
+
+  it("every depth matches Eaton 1975 with the realisation's own trend (evaluateCompactionTrend) to 1e-12", () => {
+    // Own case; reference per realisation from evaluateCompactionTrend (Zhang 2011 form),
+    // eatonRatio + eatonPorePressure (Eaton 1975) and eaton1969Fracture (Eaton 1969). The
+    // depth stepping of the trend must not drift: 1e-12 relative is ~5000 ulp, far below any
+    // physical meaning and far above double rounding of the direct evaluation.
+    const out = simulatePressureUncertainty(input);
+    const get = (name: string): Float64Array => out.draws.find((d) => d.name === name)!.values;
+    const f = get("overburdenFactor"), n = get("eatonExponent"), a0 = get("trendIntercept[0]"), b0 = get("trendSlope[0]"), nu = get("poissonRatio");
+    for (let i = 0; i < D; i++) {
+      if (i === 150) {
+        expect(out.ppP50Psi[i]).toBeNaN();
+        continue;
+      }
+      const pp: number[] = [];
+      const fr: number[] = [];
+      for (let r = 0; r < 11; r++) {
+        // Linearised form: ln(Δtml − Δtm) = a, −c = b (drawn); back to the trend parameters.
+        const tr: CompactionTrend = { kind: "sonicExponential", segments: [
+          { topBmlFt: 0, params: { dtMatrixUsPerFt: 65, dtMudlineUsPerFt: 65 + Math.exp(a0[r]), decayPerFt: -b0[r] }, fittedOn: null },
+        ] };
+        const dtn = evaluateCompactionTrend({ trend: tr, bmlFt: [bml[i]] });
+        const ratio = eatonRatio({ log: "sonic", observed: [obs[i]], trend: dtn });
+        const sv = input.overburdenPsi[i] * f[r];
+        const p = eatonPorePressure({ overburdenPsi: [sv], hydrostaticPsi: [input.hydrostaticPsi[i]], ratio, exponent: n[r] }).ppPsi[0];
+        pp.push(p);
+        fr.push(eaton1969Fracture({ tvdFt: [tvd[i]], ppPsi: [p], svPsi: [sv], poissonRatio: nu[r] }).shminPsi[0]);
+      }
+      for (const [k, q] of [[1, out.ppP10Psi], [5, out.ppP50Psi], [9, out.ppP90Psi]] as const) {
+        expect(Math.abs(q[i] - sortedAt(pp, k))).toBeLessThan(1e-12 * sortedAt(pp, k));
+      }
+      for (const [k, q] of [[1, out.fracP10Psi], [5, out.fracP50Psi], [9, out.fracP90Psi]] as const) {
+        expect(Math.abs(q[i] - sortedAt(fr, k))).toBeLessThan(1e-12 * sortedAt(fr, k));
+      }
+    }
+  });
+
+  it("a run starting on an anchor block boundary (index 64, 128) repeats the full run bit for bit", () => {
+    // Own case (design property): the trend state is re-evaluated at every multiple of 64, so
+    // the result at a depth depends only on the inputs since its block began — the property a
+    // run split across threads at block boundaries relies on.
+    const full = simulatePressureUncertainty(input);
+    for (const start of [64, 128]) {
+      const cut = <T,>(a: ArrayLike<T>): T[] => Array.from(a).slice(start);
+      const part = simulatePressureUncertainty({
+        ...input, tvdFt: cut(input.tvdFt), bmlFt: cut(input.bmlFt), overburdenPsi: cut(input.overburdenPsi),
+        hydrostaticPsi: cut(input.hydrostaticPsi), observed: cut(input.observed),
+      });
+      for (const key of ["ppP10Psi", "ppP50Psi", "ppP90Psi", "fracP10Psi", "fracP50Psi", "fracP90Psi", "ppMeanPsi", "ppStdPsi"] as const) {
+        expect(part[key]).toEqual(full[key].slice(start));
+      }
+    }
+  });
+});
