@@ -102,18 +102,61 @@ export function interpolateOnDepthIndex(args: {
   if (n === 0 || Number.isNaN(depthFt)) return NaN;
   if (depthFt <= tvdFt[0]) return depthFt === tvdFt[0] || clampEnds ? values[0] : NaN;
   if (depthFt >= tvdFt[n - 1]) return depthFt === tvdFt[n - 1] || clampEnds ? values[n - 1] : NaN;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (tvdFt[mid] <= depthFt) lo = mid;
-    else hi = mid;
-  }
+  const lo = depthBracketIndex(tvdFt, depthFt);
+  const hi = Math.min(lo + 1, n - 1);
   const d0 = tvdFt[lo];
   const d1 = tvdFt[hi];
   if (d1 === d0) return values[lo];
   const t = (depthFt - d0) / (d1 - d0);
   return values[lo] + t * (values[hi] - values[lo]);
+}
+
+/**
+ * Depth bracket: the index lo of the pair of neighbouring samples that holds a depth on an
+ * increasing depth index, found by binary search (tvdFt[lo] ≤ depthFt < tvdFt[lo + 1] inside
+ * the index; 0 above the first sample, n − 2 at or below the last).
+ *
+ * Formula: bisection of [0, n − 1] keeping tvdFt[lo] ≤ depthFt (common practice, no source).
+ *
+ * @param tvdFt depth index, ft, increasing (e.g. 0.5 ft steps from 5,000 to 15,000 ft)
+ * @param depthFt the depth, ft (e.g. 11,547)
+ * @returns lo, an index in [0, max(0, n − 2)]; 0 for an empty or one-sample index
+ * @throws nothing
+ * @example depthBracketIndex([100, 100.5, 101], 100.7) // 1
+ */
+export function depthBracketIndex(tvdFt: ArrayLike<number>, depthFt: number): number {
+  let lo = 0;
+  let hi = tvdFt.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (tvdFt[mid] <= depthFt) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * Nearest depth sample: the index of the sample nearest a depth on an increasing depth index
+ * (binary search; a depth half-way between two samples takes the shallower one).
+ *
+ * Formula: lo = depthBracketIndex(tvdFt, depthFt); the nearer of lo and lo + 1
+ * (common practice, no source).
+ *
+ * @param tvdFt depth index, ft, increasing (e.g. 0.5 ft steps)
+ * @param depthFt the depth, ft (e.g. 11,547)
+ * @returns the index, or -1 outside [first − step/2, last + step/2] (step = mean spacing)
+ *   or for NaN
+ * @throws nothing
+ * @example nearestDepthSampleIndex([100, 100.5, 101], 100.7) // 1
+ */
+export function nearestDepthSampleIndex(tvdFt: ArrayLike<number>, depthFt: number): number {
+  const n = tvdFt.length;
+  if (n === 0 || !Number.isFinite(depthFt)) return -1;
+  const step = n > 1 ? (tvdFt[n - 1] - tvdFt[0]) / (n - 1) : 0;
+  if (depthFt < tvdFt[0] - step / 2 || depthFt > tvdFt[n - 1] + step / 2) return -1;
+  const lo = depthBracketIndex(tvdFt, depthFt);
+  const hi = Math.min(lo + 1, n - 1);
+  return Math.abs(tvdFt[hi] - depthFt) < Math.abs(depthFt - tvdFt[lo]) ? hi : lo;
 }
 
 /** Read element `i` of a series (a number stands for every sample). */

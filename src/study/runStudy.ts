@@ -30,6 +30,7 @@ import {
 } from "../pipeline/predictPorePressure.js";
 import { predictStressWindow, type FractureMethodChoice, type StressWindowOptions, type StressWindowPrediction } from "../pipeline/predictStressWindow.js";
 import { ucsFromSlownessHorsrud2001, ucsFromSlownessLal1999 } from "../stress/ucsCorrelations.js";
+import { nearestDepthSampleIndex } from "../stress/stressSeries.js";
 import { compileCurveFormula } from "../formula/compileCurveFormula.js";
 import type { PressureObservation, MisfitTable } from "../porepressure/misfitTable.js";
 import { porePressureMisfitTable } from "../porepressure/misfitTable.js";
@@ -160,17 +161,11 @@ function onFullIndex(
   return out as unknown as PressureUncertaintyResult;
 }
 
+/** Nearest sample, -1 outside [first, last] sample (stricter than nearestDepthSampleIndex's half-step margin). */
 function nearestIndex(tvdFt: Float64Array, depthFt: number): number {
   const n = tvdFt.length;
   if (n === 0 || !(depthFt >= tvdFt[0] && depthFt <= tvdFt[n - 1])) return -1;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (tvdFt[mid] <= depthFt) lo = mid;
-    else hi = mid;
-  }
-  return depthFt - tvdFt[lo] <= tvdFt[hi] - depthFt ? lo : hi;
+  return nearestDepthSampleIndex(tvdFt, depthFt);
 }
 
 function hydrostaticFromLas(las: { parameters: { mnemonic: string; unit: string; value: string; line?: number }[] }, file: string): number | undefined {

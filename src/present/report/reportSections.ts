@@ -6,12 +6,16 @@
 import { PSI_PER_FT_PER_PPG } from "../../units/index.js";
 import type { Warning } from "../../errors.js";
 import { OVERBURDEN_SOURCE_NAMES } from "../../stress/overburden.js";
+import { nearestDepthSampleIndex } from "../../stress/stressSeries.js";
 import { porePressureMisfitTable, type MisfitRow, type PressureObservation } from "../../porepressure/misfitTable.js";
 import type { PrimaryPorePressureMethod, TrendOutcome } from "../../pipeline/predictPorePressure.js";
 import { escapeHtml } from "../escapeHtml.js";
 import { reportNumberCell, reportTextCell, formatReportNumber } from "./formatReportNumber.js";
 import { PORE_PRESSURE_METHOD_LABELS } from "./reportFigures.js";
 import type { WellReportInput } from "./reportTypes.js";
+
+/** Nearest depth sample index, defined once in stress/stressSeries.ts; re-exported here where the report API has always offered it. */
+export { nearestDepthSampleIndex };
 
 /** Misfit (ppg EMW) above which a measured point is flagged in the findings: 0.5 ppg (own choice, about twice the scatter of log-derived pore pressure). */
 export const CALIBRATION_FLAG_PPG = 0.5;
@@ -39,28 +43,6 @@ function section(id: string, title: string, inner: string): string {
 
 function note(text: string): string {
   return `<p class="note">${escapeHtml(text)}</p>`;
-}
-
-/**
- * Index of the sample nearest a depth on an increasing depth index (binary search).
- * @param tvdFt depth index, ft, increasing
- * @param depthFt the depth, ft
- * @returns the index, or -1 outside [first − step/2, last + step/2] or for NaN
- * @example nearestDepthSampleIndex([100, 100.5, 101], 100.7) // 1
- */
-export function nearestDepthSampleIndex(tvdFt: ArrayLike<number>, depthFt: number): number {
-  const n = tvdFt.length;
-  if (n === 0 || !Number.isFinite(depthFt)) return -1;
-  const step = n > 1 ? (tvdFt[n - 1] - tvdFt[0]) / (n - 1) : 0;
-  if (depthFt < tvdFt[0] - step / 2 || depthFt > tvdFt[n - 1] + step / 2) return -1;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (tvdFt[mid] <= depthFt) lo = mid;
-    else hi = mid;
-  }
-  return Math.abs(tvdFt[hi] - depthFt) < Math.abs(depthFt - tvdFt[lo]) ? hi : lo;
 }
 
 /**
