@@ -205,12 +205,13 @@ function fillEatonLogLinearTrend(
 }
 
 /**
- * Depths per block of the exponential-trend recurrence: the trend state is computed exactly
+ * Depth indices per block (64) of the exponential-trend recurrence: the trend state is computed exactly
  * at every multiple of this index (and after any gap or segment change), so the rounding of
  * the recurrence never runs longer than one block and any run split at a block boundary
  * gives the same bits.
  */
-const TREND_ANCHOR_BLOCK = 64;
+export const MONTE_CARLO_DEPTH_BLOCK = 64;
+const TREND_ANCHOR_BLOCK = MONTE_CARLO_DEPTH_BLOCK;
 /** |relative step| up to which ln(1 + δ) is taken from its series (error < δ⁶/6 < 1e-17). */
 const LOG1P_SERIES_MAX = 2e-3;
 
@@ -364,6 +365,11 @@ interface TrendDraws {
  *   The American Statistician 50(4):361–365
  */
 export function simulatePressureUncertainty(input: PressureUncertaintyInput): PressureUncertaintyResult {
+  return simulateDepthRange(input, 0, input.tvdFt.length);
+}
+
+/** The whole Monte Carlo over depth indices [i0, i1): arrays of length i1 − i0, warnings with absolute indices. */
+function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: number): PressureUncertaintyResult {
   const { tvdFt, bmlFt, overburdenPsi, hydrostaticPsi, observed, realisations: R, seed } = input;
   const mw = input.plannedMudWeightPsiPerFt;
 
@@ -530,9 +536,10 @@ export function simulatePressureUncertainty(input: PressureUncertaintyInput): Pr
   }
 
   // ---- depth loop ---------------------------------------------------------------------------
-  const mk = (): Float64Array => new Float64Array(nDepth);
-  const ppQ = new Float64Array(3 * nDepth); // interleaved P10, P50, P90 while looping
-  const frQ = new Float64Array(3 * nDepth);
+  const nOut = i1 - i0;
+  const mk = (): Float64Array => new Float64Array(nOut);
+  const ppQ = new Float64Array(3 * nOut); // interleaved P10, P50, P90 while looping
+  const frQ = new Float64Array(3 * nOut);
   const ppMeanPsi = mk();
   const ppStdPsi = mk();
   const probMudBelowPorePressure = mk();
@@ -556,7 +563,8 @@ export function simulatePressureUncertainty(input: PressureUncertaintyInput): Pr
   let trendSeg = -1;
   let trendZ = NaN;
 
-  for (let i = 0; i < nDepth; i++) {
+  for (let i = i0; i < i1; i++) {
+    const o = i - i0; // output position
     const sv = overburdenPsi[i];
     const ph = hydrostaticPsi[i];
     const obs = observed[i];
@@ -606,29 +614,29 @@ export function simulatePressureUncertainty(input: PressureUncertaintyInput): Pr
       const nAbove = m.nAbove;
       if (Number.isFinite(s2)) {
         const mean = s1 / R;
-        ppMeanPsi[i] = shift + mean;
-        ppStdPsi[i] = Math.sqrt(Math.max(0, (s2 - R * mean * mean) / (R - 1)));
-        probMudBelowPorePressure[i] = Number.isFinite(mudPsi) ? nBelow / R : NaN;
-        probMudAboveFracture[i] = Number.isFinite(mudPsi) ? nAbove / R : NaN;
-        ppTracker.quantiles(ppBuf, ppQ, 3 * i);
-        frTracker.quantiles(frBuf, frQ, 3 * i);
+        ppMeanPsi[o] = shift + mean;
+        ppStdPsi[o] = Math.sqrt(Math.max(0, (s2 - R * mean * mean) / (R - 1)));
+        probMudBelowPorePressure[o] = Number.isFinite(mudPsi) ? nBelow / R : NaN;
+        probMudAboveFracture[o] = Number.isFinite(mudPsi) ? nAbove / R : NaN;
+        ppTracker.quantiles(ppBuf, ppQ, 3 * o);
+        frTracker.quantiles(frBuf, frQ, 3 * o);
         continue;
       }
     }
     // Missing input (or a non-finite realisation): NaN everywhere at this depth.
     nMissing++;
     if (firstMissing < 0) firstMissing = i;
-    ppMeanPsi[i] = NaN;
-    ppStdPsi[i] = NaN;
-    probMudBelowPorePressure[i] = NaN;
-    probMudAboveFracture[i] = NaN;
-    ppQ[3 * i] = ppQ[3 * i + 1] = ppQ[3 * i + 2] = NaN;
-    frQ[3 * i] = frQ[3 * i + 1] = frQ[3 * i + 2] = NaN;
+    ppMeanPsi[o] = NaN;
+    ppStdPsi[o] = NaN;
+    probMudBelowPorePressure[o] = NaN;
+    probMudAboveFracture[o] = NaN;
+    ppQ[3 * o] = ppQ[3 * o + 1] = ppQ[3 * o + 2] = NaN;
+    frQ[3 * o] = frQ[3 * o + 1] = frQ[3 * o + 2] = NaN;
   }
 
   const split = (q: Float64Array, m: number): Float64Array => {
     const out = mk();
-    for (let i = 0; i < nDepth; i++) out[i] = q[3 * i + m];
+    for (let o = 0; o < nOut; o++) out[o] = q[3 * o + m];
     return out;
   };
   const ppP10Psi = split(ppQ, 0);
@@ -647,10 +655,10 @@ export function simulatePressureUncertainty(input: PressureUncertaintyInput): Pr
   }
   let nClosed = 0;
   let firstClosed = -1;
-  for (let i = 0; i < nDepth; i++) {
-    if (ppP90Psi[i] >= fracP10Psi[i]) {
+  for (let o = 0; o < nOut; o++) {
+    if (ppP90Psi[o] >= fracP10Psi[o]) {
       nClosed++;
-      if (firstClosed < 0) firstClosed = i;
+      if (firstClosed < 0) firstClosed = o + i0;
     }
   }
   if (nClosed > 0) {
@@ -676,6 +684,96 @@ export function simulatePressureUncertainty(input: PressureUncertaintyInput): Pr
     probMudBelowPorePressure,
     probMudAboveFracture,
     draws,
+    warnings,
+  };
+}
+
+/**
+ * One depth range of {@link simulatePressureUncertainty}: the same draws (same input, same
+ * seed), evaluated only at depth indices [startIndex, endIndex), so a long well can be shared
+ * between threads and put back together with {@link joinPressureUncertaintyParts}.
+ *
+ * Formula: as {@link simulatePressureUncertainty}. The range must start on a multiple of
+ * {@link MONTE_CARLO_DEPTH_BLOCK} (64): the stepped trend state restarts there, so the part
+ * repeats the whole-well values at its depths bit for bit.
+ *
+ * @param input.input the whole-well input, unchanged (all arrays full length)
+ * @param input.startIndex first depth index, a multiple of 64 in [0, depths], e.g. 20,032
+ * @param input.endIndex depth index after the last, in [startIndex, depths], e.g. 40,000
+ * @returns a {@link PressureUncertaintyResult} whose arrays have endIndex − startIndex values;
+ *   warning indices are whole-well indices
+ * @throws ShalepointError E_RANGE (range not inside the well or start not a multiple of 64),
+ *   and everything {@link simulatePressureUncertainty} throws
+ * @example simulatePressureUncertaintyPart({ input, startIndex: 64, endIndex: 128 }).ppP50Psi
+ * // equals simulatePressureUncertainty(input).ppP50Psi.subarray(64, 128), bit for bit
+ * @see simulatePressureUncertainty
+ */
+export function simulatePressureUncertaintyPart(args: { input: PressureUncertaintyInput; startIndex: number; endIndex: number }): PressureUncertaintyResult {
+  const { input, startIndex, endIndex } = args;
+  const n = input.tvdFt.length;
+  if (!(Number.isInteger(startIndex) && startIndex >= 0 && startIndex % MONTE_CARLO_DEPTH_BLOCK === 0 && startIndex <= n)) {
+    throw new ShalepointError("E_RANGE", "a depth range must start on a multiple of 64 inside the well", {
+      param: "startIndex", value: startIndex, allowed: `multiple of ${MONTE_CARLO_DEPTH_BLOCK} in [0, ${n}]`,
+    });
+  }
+  if (!(Number.isInteger(endIndex) && endIndex >= startIndex && endIndex <= n)) {
+    throw new ShalepointError("E_RANGE", "a depth range must end inside the well, after its start", {
+      param: "endIndex", value: endIndex, allowed: `integer in [${startIndex}, ${n}]`,
+    });
+  }
+  return simulateDepthRange(input, startIndex, endIndex);
+}
+
+/**
+ * Join consecutive depth parts of one Monte Carlo run (from {@link simulatePressureUncertaintyPart},
+ * in depth order, covering the well) into the whole-well result.
+ *
+ * Arrays are concatenated; draws come from the first part (every part draws the same);
+ * warnings of one code are merged: counts added, the first part's index and depth kept.
+ *
+ * @param args.parts the parts in depth order, e.g. two halves of a 40,000-depth run
+ * @returns {@link PressureUncertaintyResult} equal to the single-call result
+ * @throws ShalepointError E_RANGE when there are no parts or they differ in realisations or seed
+ * @example joinPressureUncertaintyParts({ parts: [partA, partB] }).ppP50Psi.length // 40000
+ * @see simulatePressureUncertaintyPart
+ */
+export function joinPressureUncertaintyParts(args: { parts: ReadonlyArray<PressureUncertaintyResult> }): PressureUncertaintyResult {
+  const { parts } = args;
+  if (parts.length === 0 || parts.some((p) => p.realisations !== parts[0].realisations || p.seed !== parts[0].seed)) {
+    throw new ShalepointError("E_RANGE", "parts must be one or more pieces of the same run (same realisations and seed)", {
+      param: "parts", value: parts.length, allowed: "≥ 1 parts of one run",
+    });
+  }
+  const cat = (key: keyof PressureUncertaintyResult): Float64Array => {
+    const out = new Float64Array(parts.reduce((s, p) => s + (p[key] as Float64Array).length, 0));
+    let at = 0;
+    for (const p of parts) {
+      out.set(p[key] as Float64Array, at);
+      at += (p[key] as Float64Array).length;
+    }
+    return out;
+  };
+  const warnings: Warning[] = [];
+  for (const code of ["W_MC_MISSING_DEPTHS", "W_MC_WINDOW_CLOSED"]) {
+    const hits = parts.flatMap((p) => p.warnings.filter((w) => w.code === code));
+    if (hits.length > 0) warnings.push({ ...hits[0], count: hits.reduce((s, w) => s + (w.count ?? 0), 0) });
+  }
+  return {
+    realisations: parts[0].realisations,
+    seed: parts[0].seed,
+    ppP10Psi: cat("ppP10Psi"),
+    ppP50Psi: cat("ppP50Psi"),
+    ppP90Psi: cat("ppP90Psi"),
+    ppMeanPsi: cat("ppMeanPsi"),
+    ppStdPsi: cat("ppStdPsi"),
+    fracP10Psi: cat("fracP10Psi"),
+    fracP50Psi: cat("fracP50Psi"),
+    fracP90Psi: cat("fracP90Psi"),
+    windowLowerPsi: cat("windowLowerPsi"),
+    windowUpperPsi: cat("windowUpperPsi"),
+    probMudBelowPorePressure: cat("probMudBelowPorePressure"),
+    probMudAboveFracture: cat("probMudAboveFracture"),
+    draws: parts[0].draws,
     warnings,
   };
 }

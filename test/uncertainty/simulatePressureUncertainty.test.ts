@@ -6,6 +6,8 @@
 import { describe, expect, it } from "vitest";
 import {
   simulatePressureUncertainty,
+  simulatePressureUncertaintyPart,
+  joinPressureUncertaintyParts,
   type PressureUncertaintyInput,
 } from "../../src/uncertainty/index.js";
 import { eatonPorePressure, eatonRatio, bowersPorePressure } from "../../src/porepressure/index.js";
@@ -362,5 +364,20 @@ describe("simulatePressureUncertainty — exponential-to-matrix trend stepped in
         expect(part[key]).toEqual(full[key].slice(start));
       }
     }
+  });
+
+  it("simulatePressureUncertaintyPart + joinPressureUncertaintyParts repeat the whole run bit for bit", () => {
+    // Own case (design property): parts starting on multiples of 64, joined in depth order,
+    // equal the single call — arrays, draws and the merged missing-depth warning (depth 150).
+    const full = simulatePressureUncertainty(input);
+    for (const cuts of [[0, 128, D], [0, 64, 256, D], [0, D]]) {
+      const parts = cuts.slice(1).map((end, k) => simulatePressureUncertaintyPart({ input, startIndex: cuts[k], endIndex: end }));
+      const joined = joinPressureUncertaintyParts({ parts });
+      expect(joined).toEqual(full);
+    }
+    expect(full.warnings.find((w) => w.code === "W_MC_MISSING_DEPTHS")).toMatchObject({ count: 1, index: 150 });
+    expect(() => simulatePressureUncertaintyPart({ input, startIndex: 100, endIndex: D })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
+    expect(() => simulatePressureUncertaintyPart({ input, startIndex: 64, endIndex: D + 1 })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
+    expect(() => joinPressureUncertaintyParts({ parts: [] })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
   });
 });
