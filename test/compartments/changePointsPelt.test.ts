@@ -8,20 +8,12 @@
 import { describe, expect, it } from "vitest";
 import { findChangePointsPelt, medianInPlaceForCompartments, type ChangePointCost } from "../../src/compartments/index.js";
 import { ShalepointError } from "../../src/errors.js";
+import { seededUniform } from "../helpers/seededRandom.js";
 
 const Y = Object.freeze([0.1, -0.2, 0.0, 0.3, -0.1, 5.2, 4.9, 5.1, 4.8, 5.0, 1.0, 1.2, 0.9, 1.1, 0.8]);
 
-/** Seeded uniform generator (mulberry32), so every random case is reproducible. */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Seeded uniform generator (mulberry32, test/helpers/seededRandom.ts), so every random case is reproducible. */
+const rng = seededUniform;
 function gauss(r: () => number): number {
   return Math.sqrt(-2 * Math.log(1 - r())) * Math.cos(2 * Math.PI * r());
 }

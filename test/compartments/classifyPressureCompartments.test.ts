@@ -14,17 +14,9 @@
 import { describe, expect, it } from "vitest";
 import { classifyPressureCompartments, compartmentIntervalStats, compartmentLineFit, segmentPressureProfile } from "../../src/compartments/index.js";
 import { ShalepointError } from "../../src/errors.js";
+import { seededUniform } from "../helpers/seededRandom.js";
 
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+const rng = seededUniform;
 
 const HYDRO_PSI_PER_FT = 0.465;
 function truthExcessPsi(z: number): number {

@@ -16,7 +16,7 @@ import {
   porePressureMisfitTable,
   type PressureObservation,
 } from "../../src/porepressure/index.js";
-import { seededNormal } from "./seededNoise.js";
+import { seededNormalClampedLog as seededNormal } from "../helpers/seededRandom.js";
 
 // ---- a synthetic Quillon-style well (invented) -------------------------------------------
 const tvdFt = Float64Array.from({ length: 101 }, (_, k) => 4000 + 100 * k); // 4000–14,000 ft

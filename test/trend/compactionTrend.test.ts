@@ -16,7 +16,7 @@ import {
   MIN_TREND_POINTS,
   type CompactionTrend,
 } from "../../src/trend/index.js";
-import { seededNormal } from "./testRandom.js";
+import { seededNormal } from "../helpers/seededRandom.js";
 
 const ALL = Object.freeze([{ topBmlFt: 0, baseBmlFt: 20000 }]);
 
