@@ -21,6 +21,7 @@ import { hydrostaticPressure } from "../stress/hydrostatic.js";
 import { fitCompactionTrend } from "../trend/fitCompactionTrend.js";
 import type { BmlInterval, CompactionTrend } from "../trend/trendTypes.js";
 import { SAFETY_CAUTION_TEXT } from "../present/caution.js";
+import { readInputText } from "../study/readInputFile.js";
 import type { PickerWellData } from "./pickerModel.js";
 
 /** Options of {@link loadPickerWell}. Give `wellDir` or `lasPath`. */
@@ -124,11 +125,12 @@ export function loadPickerWell(options: PickerWellOptions): PickerWell {
   }
   const wellDir = realpathSync(dirname(lasPath));
   const lasName = basename(lasPath);
-  const text = readFileSync(lasPath, "utf8");
+  // Size and binary checks before reading (a 2 GB or binary file is refused early).
+  const text = readInputText(lasPath, { param: "lasPath" }).text;
 
   const surveyPath = join(wellDir, "survey.csv");
   const survey = existsSync(surveyPath)
-    ? readDirectionalSurvey(readFileSync(surveyPath, "utf8"), { file: "survey.csv" }).records.map((r) => ({ mdFt: r.mdFt, incDeg: r.incDeg, aziDeg: r.aziDeg }))
+    ? readDirectionalSurvey(readInputText(surveyPath, { param: "survey.csv" }).text, { file: "survey.csv" }).records.map((r) => ({ mdFt: r.mdFt, incDeg: r.incDeg, aziDeg: r.aziDeg }))
     : undefined;
   const { well, las } = readWellFromLas(text, {
     file: lasName,
