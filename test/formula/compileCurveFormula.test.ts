@@ -6,17 +6,7 @@ import { describe, expect, it } from "vitest";
 import { evaluate } from "mathjs";
 import { compileCurveFormula } from "../../src/formula/compileCurveFormula.js";
 import { ucsFromSlownessHorsrud2001 } from "../../src/stress/ucsCorrelations.js";
-import { ShalepointError } from "../../src/errors.js";
-
-function errOf(fn: () => unknown): ShalepointError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof ShalepointError) return e;
-    throw e;
-  }
-  throw new Error("expected a ShalepointError");
-}
+import { errorOf as errOf } from "../helpers/shalepointErrors.js";
 
 describe("compileCurveFormula", () => {
   it("Horsrud 2001 written as a user formula matches the built-in correlation and mathjs (from memory)", () => {

@@ -1,16 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { readDrillingData } from "../../src/io/drillingData.js";
-import { ShalepointError } from "../../src/errors.js";
-
-function errorOf(f: () => unknown): ShalepointError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(ShalepointError);
-    return e as ShalepointError;
-  }
-  throw new Error("no error thrown");
-}
+import { errorOf } from "../helpers/shalepointErrors.js";
 
 const OILFIELD = Object.freeze(
   [

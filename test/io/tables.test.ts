@@ -16,21 +16,11 @@ import {
   readFormationTops,
   readDirectionalSurvey,
 } from "../../src/io/tables.js";
-import { ShalepointError } from "../../src/errors.js";
+import { errorOf } from "../helpers/shalepointErrors.js";
 
 const dir = new URL("../fixtures/csv/", import.meta.url);
 const fixture = (name: string): string => readFileSync(new URL(name, dir), "utf8");
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
-
-function errorOf(f: () => unknown): ShalepointError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(ShalepointError);
-    return e as ShalepointError;
-  }
-  throw new Error("no error thrown");
-}
 
 describe("parseCsv (RFC 4180)", () => {
   it("parseCsv: quoted commas, doubled quotes, a line break inside quotes, CRLF, # comments", () => {

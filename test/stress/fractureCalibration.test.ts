@@ -6,21 +6,13 @@
 import { describe, expect, it } from "vitest";
 import { calibrateFractureModel, type StressTestPoint } from "../../src/stress/fractureCalibration.js";
 import { ShalepointError } from "../../src/errors.js";
+import { codeOf } from "../helpers/shalepointErrors.js";
 
 // Normally pressured well: Pp 0.465 psi/ft, Sv 1.0 psi/ft, 0–10,000 ft.
 const tvdFt = Object.freeze(Array.from({ length: 11 }, (_, i) => i * 1000));
 const ppPsi = Object.freeze(tvdFt.map((d) => 0.465 * d));
 const svPsi = Object.freeze(tvdFt.map((d) => d));
 const at = (d: number, k: number): number => 0.465 * d + k * 0.535 * d;
-
-function codeOf(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    return (e as ShalepointError).code;
-  }
-  return undefined;
-}
 
 describe("calibrateFractureModel", () => {
   // x = Sv − Pp: 2140 psi at 4000 ft, 4280 psi at 8000 ft. Residuals +100 and −50 psi

@@ -15,17 +15,9 @@ import { matthewsKellyFracture } from "../../src/stress/matthewsKellyFracture.js
 import { leakOffEquivalentMudWeight, maximumAllowableSurfacePressure } from "../../src/stress/leakOffEmw.js";
 import { ShalepointError } from "../../src/errors.js";
 import { psiPerFtToPpg } from "../../src/units/index.js";
+import { codeOf } from "../helpers/shalepointErrors.js";
 
 const frozen = <T>(a: T[]): readonly T[] => Object.freeze([...a]);
-
-function codeOf(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    return e instanceof ShalepointError ? e.code : "not a ShalepointError";
-  }
-  return undefined;
-}
 
 describe("hubbertWillisFractureBounds", () => {
   it("P/D 0.735, S/D 1 → 0.8233 / 0.8675 psi/ft (CHECK-VALUES §6, own case from Hubbert & Willis 1957)", () => {

@@ -6,17 +6,8 @@ import { describe, expect, it } from "vitest";
 import { frictionalStressRatio, frictionalStressBounds, stressPolygon } from "../../src/stress/frictionalStressBounds.js";
 import { classifyStressRegime } from "../../src/stress/stressRegime.js";
 import { stressConsistencyFindings } from "../../src/stress/stressConsistencyFindings.js";
-import { ShalepointError } from "../../src/errors.js";
 import { mpaToPsi, psiToMpa } from "../../src/units/index.js";
-
-function codeOf(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    return (e as ShalepointError).code;
-  }
-  return undefined;
-}
+import { codeOf } from "../helpers/shalepointErrors.js";
 
 describe("frictionalStressRatio", () => {
   it("q(0.6) = 3.119, q(0.4) = 2.182, q(0.8) = 4.329, q(1.0) = 5.828 (CHECK-VALUES §7, published: Jaeger & Cook; Zoback 2007 ch. 4)", () => {

@@ -15,18 +15,10 @@ import { breakoutMudPressure, breakoutWidth } from "../../src/stress/breakoutLim
 import { ucsFromSlownessHorsrud2001, ucsFromSlownessLal1999 } from "../../src/stress/ucsCorrelations.js";
 import { frictionalStressRatio } from "../../src/stress/frictionalStressBounds.js";
 import { ShalepointError } from "../../src/errors.js";
+import { codeOf } from "../helpers/shalepointErrors.js";
 
 // CHECK-VALUES §8 own case: 7000 ft, Shmin 4300, SHmax 6300, Pp 3080 psi, UCS 3500, μi 0.6, T 800.
 const CASE = Object.freeze({ shminPsi: 4300, shmaxPsi: 6300, ppPsi: 3080 });
-
-function codeOf(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    return (e as ShalepointError).code;
-  }
-  return undefined;
-}
 
 describe("kirschWallStress", () => {
   it("uniaxial far field σ: hoop extremes 3σ at 90° and −σ at 0° (CHECK-VALUES §8, published Kirsch 1898)", () => {

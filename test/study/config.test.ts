@@ -4,20 +4,10 @@ import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { createHash } from "node:crypto";
 import { loadStudyConfig, parseStudyConfig, studyConfigFromText, studyDepthFt, studyGradientPsiPerFt, formatKeyPath } from "../../src/study/config.js";
-import { ShalepointError } from "../../src/errors.js";
+import { errorOf } from "../helpers/shalepointErrors.js";
 
 const DEMO = resolve("demo-logs/demo-study.json");
 const demo = (): Record<string, any> => JSON.parse(readFileSync(DEMO, "utf8"));
-
-function errorOf(fn: () => unknown): ShalepointError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof ShalepointError) return e;
-    throw e;
-  }
-  throw new Error("expected a ShalepointError");
-}
 
 describe("loadStudyConfig", () => {
   it("loads the demo study and resolves paths against the study file's folder", () => {

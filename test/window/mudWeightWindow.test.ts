@@ -5,19 +5,9 @@
  */
 import { describe, expect, it } from "vitest";
 import { mudWeightWindow } from "../../src/window/mudWeightWindow.js";
-import { ShalepointError } from "../../src/errors.js";
+import { errorOf as errOf } from "../helpers/shalepointErrors.js";
 
 const K = 12 / 231; // psi/ft per ppg, exact (CHECK-VALUES §0)
-
-function errOf(fn: () => unknown): ShalepointError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof ShalepointError) return e;
-    throw e;
-  }
-  throw new Error("expected a ShalepointError");
-}
 
 describe("mudWeightWindow", () => {
   it("10.0 ppg pore pressure, 15.0 ppg fracture, trip 0.3 / kick 0.5 ppg → 10.3 to 14.5 ppg (own case)", () => {
