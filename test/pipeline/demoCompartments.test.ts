@@ -16,28 +16,13 @@ import { predictPorePressure, type PorePressurePrediction, type PorePressurePred
 import { predictCompartments, type CompartmentPrediction } from "../../src/pipeline/predictCompartments.js";
 import { readFormationPressureTests } from "../../src/io/tables.js";
 import type { PressureTestPoint } from "../../src/compartments/fitPressureSystems.js";
-import { mudlineTvdFt } from "../../src/well/depthReference.js";
 import { ShalepointError } from "../../src/errors.js";
-import { DEMO, loadDemoWell, type DemoWell } from "./demoWells.js";
+import { DEMO, demoPorePressureOptions, loadDemoWell, type DemoWell } from "./demoWells.js";
 
 /** The options of demoRoundTrip.test.ts (normal trend fitted from 600 ft below the mudline to a
  * depth picked from the logs alone), with Bowers as the primary method. */
-function demoOptions(d: DemoWell, normalBaseTvdssFt: number, unloading?: { onsetTvdFt: number }): PorePressurePredictionOptions {
-  const mudline = mudlineTvdFt(d.well.datums);
-  const base = normalBaseTvdssFt + d.well.datums.rtElevationFt - mudline;
-  const intervals = [{ topBmlFt: 600, baseBmlFt: base }];
-  return {
-    hydrostaticGradientPsiPerFt: d.hydrostaticPsiPerFt,
-    shale: { criterion: { kind: "grCutoff", cutoffApi: 85 } },
-    sonicTrend: { use: "fit", kind: "sonicExponential", segments: [{ topBmlFt: 0, dtMatrixUsPerFt: 65, intervals }] },
-    resistivityTrend: { use: "fit", kind: "resistivityLogLinear", segments: [{ topBmlFt: 0, intervals }] },
-    eatonSonic: {},
-    eatonResistivity: {},
-    equivalentDepth: true,
-    bowers: { a: 10, b: 0.75, unloading: unloading ? { u: 3.5, onsetTvdFt: unloading.onsetTvdFt } : undefined },
-    primary: "bowers",
-  };
-}
+const demoOptions = (d: DemoWell, normalBaseTvdssFt: number, unloading?: { onsetTvdFt: number }): PorePressurePredictionOptions =>
+  demoPorePressureOptions(d, normalBaseTvdssFt, unloading, "bowers");
 
 function demoTests(slug: string): PressureTestPoint[] {
   const text = readFileSync(join(DEMO, slug, "pressure-tests.csv"), "utf8");

@@ -9,28 +9,13 @@
  */
 import { beforeAll, describe, expect, it } from "vitest";
 import { predictPorePressure, type PorePressurePrediction, type PorePressurePredictionOptions } from "../../src/pipeline/predictPorePressure.js";
-import { mudlineTvdFt } from "../../src/well/depthReference.js";
 import { psiPerFtToPpg } from "../../src/units/index.js";
-import { loadDemoWell, nearestIndex, type DemoWell } from "./demoWells.js";
+import { demoPorePressureOptions, loadDemoWell, nearestIndex, type DemoWell } from "./demoWells.js";
 
 /** Options an engineer would choose from the logs alone (no truth): normal trend fitted on the
  * shale from 600 ft below the mudline to 300 ft above the first sign of undercompaction. */
-function demoOptions(d: DemoWell, normalBaseTvdssFt: number, unloading?: { onsetTvdFt: number }): PorePressurePredictionOptions {
-  const mudline = mudlineTvdFt(d.well.datums);
-  const base = normalBaseTvdssFt + d.well.datums.rtElevationFt - mudline;
-  const intervals = [{ topBmlFt: 600, baseBmlFt: base }];
-  return {
-    hydrostaticGradientPsiPerFt: d.hydrostaticPsiPerFt,
-    shale: { criterion: { kind: "grCutoff", cutoffApi: 85 } },
-    sonicTrend: { use: "fit", kind: "sonicExponential", segments: [{ topBmlFt: 0, dtMatrixUsPerFt: 65, intervals }] },
-    resistivityTrend: { use: "fit", kind: "resistivityLogLinear", segments: [{ topBmlFt: 0, intervals }] },
-    eatonSonic: {},
-    eatonResistivity: {},
-    equivalentDepth: true,
-    bowers: { a: 10, b: 0.75, unloading: unloading ? { u: 3.5, onsetTvdFt: unloading.onsetTvdFt } : undefined },
-    primary: "eatonSonic",
-  };
-}
+const demoOptions = (d: DemoWell, normalBaseTvdssFt: number, unloading?: { onsetTvdFt: number }): PorePressurePredictionOptions =>
+  demoPorePressureOptions(d, normalBaseTvdssFt, unloading, "eatonSonic");
 
 /** RMS and mean of (predicted − true) in ppg over shale truth rows of the given zones. */
 function errorPpg(d: DemoWell, r: PorePressurePrediction, pp: Float64Array, zones: string[]): { rms: number; bias: number; n: number } {

@@ -8,6 +8,8 @@ import { readWellFromLas } from "../../src/io/loadWell.js";
 import { readDirectionalSurvey } from "../../src/io/tables.js";
 import { surveyPathAtMd } from "../../src/well/surveyPathAtMd.js";
 import type { Well } from "../../src/well/types.js";
+import type { PorePressurePredictionOptions } from "../../src/pipeline/predictPorePressure.js";
+import { mudlineTvdFt } from "../../src/well/depthReference.js";
 
 export const DEMO = resolve(__dirname, "..", "..", "demo-logs");
 
@@ -68,4 +70,33 @@ export function nearestIndex(tvdFt: Float64Array, depthFt: number): number {
     else hi = mid;
   }
   return Math.abs(tvdFt[lo] - depthFt) <= Math.abs(tvdFt[hi] - depthFt) ? lo : hi;
+}
+
+/**
+ * Pore-pressure options an engineer would choose from the logs alone (no truth): normal
+ * trend fitted on the shale from 600 ft below the mudline to a base picked above the first
+ * sign of undercompaction (given in TVDSS), GR cutoff 85 API, Bowers A 10, B 0.75 with
+ * unloading U 3.5 where asked. Shared by demoRoundTrip and demoCompartments, which differ
+ * only in the primary method.
+ */
+export function demoPorePressureOptions(
+  d: DemoWell,
+  normalBaseTvdssFt: number,
+  unloading: { onsetTvdFt: number } | undefined,
+  primary: PorePressurePredictionOptions["primary"],
+): PorePressurePredictionOptions {
+  const mudline = mudlineTvdFt(d.well.datums);
+  const base = normalBaseTvdssFt + d.well.datums.rtElevationFt - mudline;
+  const intervals = [{ topBmlFt: 600, baseBmlFt: base }];
+  return {
+    hydrostaticGradientPsiPerFt: d.hydrostaticPsiPerFt,
+    shale: { criterion: { kind: "grCutoff", cutoffApi: 85 } },
+    sonicTrend: { use: "fit", kind: "sonicExponential", segments: [{ topBmlFt: 0, dtMatrixUsPerFt: 65, intervals }] },
+    resistivityTrend: { use: "fit", kind: "resistivityLogLinear", segments: [{ topBmlFt: 0, intervals }] },
+    eatonSonic: {},
+    eatonResistivity: {},
+    equivalentDepth: true,
+    bowers: { a: 10, b: 0.75, unloading: unloading ? { u: 3.5, onsetTvdFt: unloading.onsetTvdFt } : undefined },
+    primary,
+  };
 }
