@@ -1,8 +1,12 @@
 /**
  * Normal compaction trend of the corrected d-exponent: a straight line of ln(dc) on depth
  * below the mudline, fitted on normally pressured shale.
+ *
+ * Imports ../errors.js and ../trend/fitStraightLine.ts (the project's one least-squares line,
+ * centred sums), so a copy of this file needs those two as well.
  */
 import { ShalepointError } from "../errors.js";
+import { fitStraightLine, type StraightLineFit } from "../trend/fitStraightLine.js";
 
 /** A dc normal trend: dcn(Z) = dc0 · e^(b·Z), Z depth below mudline (ft). */
 export interface DcNormalTrend {
@@ -28,7 +32,7 @@ export const MIN_DC_TREND_SAMPLES = 3;
 
 /**
  * Fit the normal trend of the corrected d-exponent: least squares of ln(dc) on depth below
- * mudline (centred sums), over the given normally pressured intervals.
+ * mudline (centred sums, by fitStraightLine), over the given normally pressured intervals.
  *
  * ln(dcn) = ln(dc0) + b·Z. In normally pressured shale dc grows with depth as the shale
  * compacts; the trend is a straight line on semilog paper (Rehm & McClendon 1971, SPE-3601;
@@ -78,31 +82,19 @@ export function fitDcNormalTrend(input: {
       hint: "Widen the normally pressured intervals or add shale samples.",
     });
   }
-  let mx = 0;
-  let my = 0;
-  for (let k = 0; k < n; k++) {
-    mx += xs[k];
-    my += ys[k];
+  let line: StraightLineFit;
+  try {
+    line = fitStraightLine({ x: xs, y: ys });
+  } catch (e) {
+    if (e instanceof ShalepointError && e.code === "E_TREND_DEGENERATE") {
+      throw new ShalepointError("E_TOO_FEW_POINTS", "a dc trend needs samples at two or more depths", { param: "intervals", value: n });
+    }
+    throw e;
   }
-  mx /= n;
-  my /= n;
-  let sxx = 0;
-  let sxy = 0;
-  for (let k = 0; k < n; k++) {
-    sxx += (xs[k] - mx) * (xs[k] - mx);
-    sxy += (xs[k] - mx) * (ys[k] - my);
-  }
-  if (!(sxx > 0)) {
-    throw new ShalepointError("E_TOO_FEW_POINTS", "a dc trend needs samples at two or more depths", { param: "intervals", value: n });
-  }
-  const b = sxy / sxx;
-  const a = my - b * mx;
-  let sse = 0;
-  for (let k = 0; k < n; k++) sse += (ys[k] - a - b * xs[k]) ** 2;
   return {
-    trend: { dcAtMudline: Math.exp(a), ratePerFt: b },
+    trend: { dcAtMudline: Math.exp(line.intercept), ratePerFt: line.slope },
     n,
-    residualStdLn: Math.sqrt(sse / Math.max(1, n - 2)),
+    residualStdLn: line.residualStd,
     bmlRangeFt: { topFt: Math.min(...xs), baseFt: Math.max(...xs) },
   };
 }
