@@ -19,7 +19,8 @@
  * - trends: refitted on all points unless given (frozen); when the fitted parameters are
  *   unchanged only new samples are evaluated, otherwise every sample;
  * - Eaton / Bowers: pointwise from the shallowest changed input (every sample when a trend
- *   moved); equivalent depth searches the whole trend, so it is re-run on the whole well.
+ *   moved); equivalent depth likewise (its search for Ze uses the whole trend, but above the
+ *   restart Ze and its bracketing samples are the same as in the shorter well).
  * Calibration refits (fitEatonExponents, fitBowers) are global and are not supported here.
  *
  * Results are estimates for trained engineers: calibrate them to measured data and have
@@ -372,7 +373,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   const n = well.tvdFt.length;
   if (n === nOld) return { ...state, well, recomputedFromIndex: n };
   const despike = options.despike ?? true;
-  const tvdFt = Float64Array.from(well.tvdFt);
+  // appendWell built fresh arrays: the prediction shares them instead of copying again.
+  const tvdFt = well.tvdFt as Float64Array;
   // pointwise: only the new samples
   const tail = depthReferenceArrays({ tvdFt: tvdFt.subarray(nOld), datums: well.datums });
   const tvdssFt = grow(old.tvdssFt, n);
@@ -459,14 +461,34 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   if (options.equivalentDepth && sonic.outcome && shaleLine.dtUsPerFt) {
     let first = 0;
     while (first < n && !(Number.isFinite(sonic.outcome.values[first]) && bmlFt[first] > 0)) first++;
-    methods.equivalentDepth = equivalentDepthPorePressure({
+    const f = Math.min(from, sonic.from);
+    const oldEd = old.methods.equivalentDepth;
+    // Samples above f keep their result when Sv, Ph, the shale line and the trend are
+    // unchanged there and their Ze (≤ Z ≤ the depth at f − 1) is bracketed by the same pair
+    // of old samples in the longer depth array: true when that depth lies strictly above
+    // the old well's last depth (the bracket search returns the last sample at or above Ze).
+    const reuse = oldEd !== undefined && f > 0 && f < nOld && tvdFt[f - 1] < tvdFt[nOld - 1];
+    // Reused samples are handed in as missing (skipped at once) and then spliced back.
+    const observed = reuse ? new Float64Array(n) : shaleLine.dtUsPerFt;
+    if (reuse) {
+      observed.fill(NaN, 0, f);
+      observed.set(shaleLine.dtUsPerFt.subarray(f), f);
+    }
+    const ed = equivalentDepthPorePressure({
       overburdenPsi: ob.result.svPsi,
       hydrostaticPsi,
       tvdFt,
-      observed: shaleLine.dtUsPerFt,
+      observed,
       trend: { kind: "sampled", tvdFt: tvdFt.subarray(first), values: sonic.outcome.values.subarray(first) },
       searchTopTvdFt: Math.max(mudline, tvdFt[Math.min(first, n - 1)]),
     });
+    if (reuse && oldEd) {
+      ed.ppPsi.set(oldEd.ppPsi.subarray(0, f));
+      ed.flags.set(oldEd.flags.subarray(0, f));
+      ed.equivalentDepthFt.set(oldEd.equivalentDepthFt.subarray(0, f));
+      ed.effectiveStressPsi.set(oldEd.effectiveStressPsi.subarray(0, f));
+      methods.equivalentDepth = { ...ed, warnings: flagWarnings(ed.flags, tvdFt, "Equivalent depth") };
+    } else methods.equivalentDepth = ed;
   }
   const warnings: Warning[] = [...ob.result.warnings, ...shale.warnings];
   for (const m of Object.values(methods)) if (m) warnings.push(...m.warnings);
@@ -476,7 +498,7 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     tvdFt,
     tvdssFt,
     bmlFt,
-    curves: { grApi: Float64Array.from(grApi), dtUsPerFt, rhobGcc, resOhmM },
+    curves: { grApi, dtUsPerFt, rhobGcc, resOhmM },
     badHole,
     overburden: ob.result,
     hydrostaticPsi,

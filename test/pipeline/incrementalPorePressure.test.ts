@@ -74,10 +74,16 @@ function expectSame(inc: PorePressurePrediction, full: PorePressurePrediction): 
     ["bowers", inc.methods.bowers?.ppPsi, full.methods.bowers?.ppPsi],
     ["bowersSigma", inc.methods.bowers?.effectiveStressPsi, full.methods.bowers?.effectiveStressPsi],
     ["eqDepth", inc.methods.equivalentDepth?.ppPsi, full.methods.equivalentDepth?.ppPsi],
+    ["eqDepthFlags", inc.methods.equivalentDepth?.flags, full.methods.equivalentDepth?.flags],
+    ["eqDepthZe", inc.methods.equivalentDepth?.equivalentDepthFt, full.methods.equivalentDepth?.equivalentDepthFt],
+    ["eqDepthSigma", inc.methods.equivalentDepth?.effectiveStressPsi, full.methods.equivalentDepth?.effectiveStressPsi],
     ["pp", inc.ppPsi, full.ppPsi],
   ];
   for (const [name, a, b] of pairs) expect({ name, firstDiff: firstDiff(a, b) }).toEqual({ name, firstDiff: -1 });
   expect(JSON.stringify(inc.sonicTrend?.trend)).toBe(JSON.stringify(full.sonicTrend?.trend));
+  // Warnings too (equivalent depth above the restart is spliced from the old state).
+  expect(JSON.stringify(inc.methods.equivalentDepth?.warnings)).toBe(JSON.stringify(full.methods.equivalentDepth?.warnings));
+  expect(JSON.stringify(inc.warnings)).toBe(JSON.stringify(full.warnings));
   expect(JSON.stringify(inc.resistivityTrend?.trend)).toBe(JSON.stringify(full.resistivityTrend?.trend));
 }
 
