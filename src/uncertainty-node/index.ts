@@ -1,0 +1,9 @@
+/**
+ * Node edge of the uncertainty module: the Monte Carlo on several cores (worker threads).
+ * Not re-exported from the package barrel, so browser bundles never meet node:worker_threads;
+ * import it as `shalepoint/dist/uncertainty-node/index.js` (or this folder) from Node.
+ *
+ * Results are estimates for trained engineers: calibrate them to measured data and have
+ * them reviewed; local regulations and licensed practice govern.
+ */
+export * from "./simulatePressureUncertaintyParallel.js";

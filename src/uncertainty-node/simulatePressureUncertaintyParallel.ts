@@ -1,0 +1,107 @@
+/**
+ * Monte Carlo pore pressure / fracture pressure uncertainty on several CPU cores.
+ *
+ * This folder is a Node edge (it uses node:worker_threads and node:os); the pure kernel stays
+ * in src/uncertainty, which keeps no I/O and no Node APIs. The well's depth index is cut into
+ * consecutive parts that start on multiples of 64 (MONTE_CARLO_DEPTH_BLOCK); the calling
+ * thread runs the first part while worker threads run the others, each with the same input
+ * and seed (so the same draws), and the parts are joined. Because each part restarts the
+ * depth-stepped trend state on a block boundary and the quantiles are exact, the result is
+ * the single-thread result bit for bit.
+ *
+ * Results are estimates for trained engineers: calibrate them to measured data and have them
+ * reviewed; local regulations and licensed practice govern.
+ */
+import os from "node:os";
+import { Worker } from "node:worker_threads";
+import { ShalepointError, type ErrorDetails } from "../errors.js";
+import {
+  MONTE_CARLO_DEPTH_BLOCK,
+  joinPressureUncertaintyParts,
+  simulatePressureUncertainty,
+  simulatePressureUncertaintyPart,
+  type PressureUncertaintyInput,
+  type PressureUncertaintyResult,
+} from "../uncertainty/simulatePressureUncertainty.js";
+
+/** Fewest depths per part worth a thread (smaller wells run on the calling thread). */
+export const MIN_DEPTHS_PER_THREAD = 4096;
+
+/** Options of {@link simulatePressureUncertaintyParallel}. */
+export interface ParallelUncertaintyOptions {
+  /** Threads in all, calling thread included; integer ≥ 1; default min(2, available cores). */
+  threads?: number;
+  /** Worker script (compiled uncertaintyPartWorker.js); default: the sibling file. */
+  workerUrl?: URL;
+}
+
+/** Split [0, n) into `parts` ranges whose starts are multiples of the block size. */
+function blockAlignedStarts(n: number, parts: number): number[] {
+  const starts = [0];
+  for (let k = 1; k < parts; k++) {
+    const s = Math.round((k * n) / parts / MONTE_CARLO_DEPTH_BLOCK) * MONTE_CARLO_DEPTH_BLOCK;
+    if (s > starts[starts.length - 1] && s < n) starts.push(s);
+  }
+  return starts;
+}
+
+function runInWorker(url: URL, msg: { input: PressureUncertaintyInput; startIndex: number; endIndex: number }): { promise: Promise<PressureUncertaintyResult>; stop: () => void } {
+  const worker = new Worker(url);
+  const promise = new Promise<PressureUncertaintyResult>((resolve, reject) => {
+    worker.once("message", (m: { ok: boolean; result?: PressureUncertaintyResult; code?: string; message?: string; details?: ErrorDetails }) => {
+      void worker.terminate();
+      if (m.ok && m.result !== undefined) resolve(m.result);
+      else reject(new ShalepointError(m.code ?? "E_INTERNAL", m.message ?? "worker failed", m.details ?? {}));
+    });
+    worker.once("error", (e) => reject(e));
+    worker.once("exit", (code) => {
+      if (code !== 0) reject(new ShalepointError("E_INTERNAL", `uncertainty worker stopped with exit code ${code}`));
+    });
+  });
+  promise.catch(() => undefined); // a part that fails after another one already failed is not unhandled
+  worker.postMessage(msg);
+  return { promise, stop: () => void worker.terminate() };
+}
+
+/**
+ * Parallel Monte Carlo uncertainty: the result of simulatePressureUncertainty, computed on
+ * up to `threads` cores, identical bit for bit.
+ *
+ * Formula: as simulatePressureUncertainty (Eaton 1975 / Bowers 1995 pore pressure, Eaton 1969
+ * or frictional-limit fracture pressure, type-7 P10/P50/P90 of Hyndman & Fan 1996).
+ *
+ * @param input see PressureUncertaintyInput (arrays are copied to the workers, not shared)
+ * @param options.threads threads in all, integer in [1, 64], default min(2, cores); wells
+ *   shorter than 2 × 4096 depths run on the calling thread alone
+ * @param options.workerUrl compiled worker script, default the sibling uncertaintyPartWorker.js
+ * @returns Promise of a PressureUncertaintyResult (psi arrays, probabilities, draws, warnings)
+ * @throws (rejects) everything simulatePressureUncertainty throws; E_RANGE for a bad thread
+ *   count; E_INTERNAL when a worker cannot start or stops
+ * @example await simulatePressureUncertaintyParallel(input, { threads: 2 })
+ * // deep-equals simulatePressureUncertainty(input)
+ * @see simulatePressureUncertaintyPart, joinPressureUncertaintyParts in src/uncertainty
+ */
+export async function simulatePressureUncertaintyParallel(
+  input: PressureUncertaintyInput,
+  options: ParallelUncertaintyOptions = {},
+): Promise<PressureUncertaintyResult> {
+  const threads = options.threads ?? Math.min(2, os.availableParallelism());
+  if (!(Number.isInteger(threads) && threads >= 1 && threads <= 64)) {
+    throw new ShalepointError("E_RANGE", "threads must be an integer in [1, 64]", { param: "threads", value: threads, allowed: "[1, 64]" });
+  }
+  const n = input.tvdFt.length;
+  const parts = Math.min(threads, Math.floor(n / MIN_DEPTHS_PER_THREAD));
+  if (parts <= 1) return simulatePressureUncertainty(input);
+  const starts = blockAlignedStarts(n, parts);
+  const ends = [...starts.slice(1), n];
+  const url = options.workerUrl ?? new URL("./uncertaintyPartWorker.js", import.meta.url);
+  const jobs = starts.slice(1).map((s, k) => runInWorker(url, { input, startIndex: s, endIndex: ends[k + 1] }));
+  try {
+    const first = simulatePressureUncertaintyPart({ input, startIndex: 0, endIndex: ends[0] });
+    const rest = await Promise.all(jobs.map((j) => j.promise));
+    return joinPressureUncertaintyParts({ parts: [first, ...rest] });
+  } catch (e) {
+    jobs.forEach((j) => j.stop());
+    throw e;
+  }
+}
