@@ -7,11 +7,17 @@
  * squares with centred sums (slope = Sxy/Sxx), standard errors from the usual regression
  * formulas; SE(A) by the delta method, A·SE(ln A).
  *
- * Imports: ../errors.js and the siblings bowersCurves.ts, porePressureFlags.ts.
+ * The line itself is fitted by ../trend/fitStraightLine.ts (the project's one least-squares
+ * line); SSE is summed from the residuals there, so R² and the standard errors can differ from
+ * the Syy − b·Sxy form in the last digits only.
+ *
+ * Imports: ../errors.js, ../trend/fitStraightLine.ts and the siblings bowersCurves.ts,
+ * porePressureFlags.ts.
  */
 import { ShalepointError, type Warning } from "../errors.js";
 import { BOWERS_DEFAULT_V0_FT_PER_S } from "./bowersCurves.js";
 import { requireLengths } from "./porePressureFlags.js";
+import { fitStraightLine, type StraightLineFit } from "../trend/fitStraightLine.js";
 
 /** Result of {@link fitBowersCrossplot}. */
 export interface BowersCrossplotFit {
@@ -80,36 +86,22 @@ export function fitBowersCrossplot(input: {
       allowed: "≥ 3 points with V > V0 and σ > 0",
     });
   }
-  let mx = 0;
-  let my = 0;
-  for (let k = 0; k < n; k++) {
-    mx += xs[k];
-    my += ys[k];
+  let line: StraightLineFit;
+  try {
+    line = fitStraightLine({ x: xs, y: ys });
+  } catch (e) {
+    if (e instanceof ShalepointError && e.code === "E_TREND_DEGENERATE") {
+      throw new ShalepointError("E_RANGE", "all points have the same effective stress: B is not determined", {
+        param: "effectiveStressPsi",
+        value: Math.exp(xs.reduce((u, v) => u + v, 0) / n),
+        unit: "psi",
+        hint: "Use points over a range of depths.",
+      });
+    }
+    throw e;
   }
-  mx /= n;
-  my /= n;
-  let sxx = 0;
-  let sxy = 0;
-  let syy = 0;
-  for (let k = 0; k < n; k++) {
-    const dx = xs[k] - mx;
-    const dy = ys[k] - my;
-    sxx += dx * dx;
-    sxy += dx * dy;
-    syy += dy * dy;
-  }
-  if (!(sxx > 0)) {
-    throw new ShalepointError("E_RANGE", "all points have the same effective stress: B is not determined", {
-      param: "effectiveStressPsi",
-      value: Math.exp(mx),
-      unit: "psi",
-      hint: "Use points over a range of depths.",
-    });
-  }
-  const b = sxy / sxx;
-  const lnA = my - b * mx;
-  const sse = Math.max(0, syy - b * sxy);
-  const s2 = sse / (n - 2);
+  const b = line.slope;
+  const lnA = line.intercept;
   const a = Math.exp(lnA);
   const warnings: Warning[] = [];
   if (!(b > 0 && b <= 1)) {
@@ -119,9 +111,10 @@ export function fitBowersCrossplot(input: {
     a,
     b,
     v0FtPerS: v0,
-    aStandardError: a * Math.sqrt(s2 * (1 / n + (mx * mx) / sxx)),
-    bStandardError: Math.sqrt(s2 / sxx),
-    rSquared: syy > 0 ? 1 - sse / syy : 1,
+    aStandardError: a * line.interceptStdErr,
+    bStandardError: line.slopeStdErr,
+    // fitStraightLine gives NaN when all ln(V − V0) are equal (Syy = 0); a flat line fits them exactly.
+    rSquared: Number.isNaN(line.rSquared) ? 1 : line.rSquared,
     n,
     nSkipped: velocityFtPerS.length - n,
     warnings,
