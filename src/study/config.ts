@@ -313,6 +313,15 @@ interface ZodLike {
   _zod: { def: Record<string, unknown> & { type: string } };
 }
 
+/** True when the path names an existing regular file (a missing path or a folder gives false). */
+function isExistingFile(path: string): boolean {
+  try {
+    return statSync(path).isFile();
+  } catch {
+    return false;
+  }
+}
+
 function unwrap(s: ZodLike): ZodLike {
   let cur = s;
   for (let k = 0; k < 10; k++) {
@@ -560,13 +569,7 @@ export function studyConfigFromText(text: string, configPath: string, options: {
       const p = w[key];
       if (p === undefined) continue;
       const full = at(p);
-      let ok = false;
-      try {
-        ok = statSync(full).isFile();
-      } catch {
-        ok = false;
-      }
-      if (!ok) {
+      if (!isExistingFile(full)) {
         throw new ShalepointError("E_CONFIG", `wells[${i}].${key}: file not found`, {
           file: configPath,
           param: `wells[${i}].${key}`,
@@ -581,13 +584,7 @@ export function studyConfigFromText(text: string, configPath: string, options: {
       const t = w.methods[trendKey];
       if (t && "file" in t) {
         const full = at(t.file);
-        let ok = false;
-        try {
-          ok = statSync(full).isFile();
-        } catch {
-          ok = false;
-        }
-        if (!ok) {
+        if (!isExistingFile(full)) {
           throw new ShalepointError("E_CONFIG", `wells[${i}].methods.${trendKey}.file: file not found`, {
             file: configPath,
             param: `wells[${i}].methods.${trendKey}.file`,
