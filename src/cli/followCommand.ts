@@ -30,6 +30,7 @@ import type { StudyResult } from "../study/runStudy.js";
 import { loadStudyConfig, type StudyConfig } from "../study/config.js";
 import { runStudy } from "../study/runStudy.js";
 import { writeStudyOutputs, writeFileAtomic } from "../study/writeStudyOutputs.js";
+import { depthBracketIndex } from "../stress/stressSeries.js";
 
 /** Where the follow command writes its lines. */
 export interface FollowIo {
@@ -277,14 +278,10 @@ export async function followOnce(session: FollowSession, io: FollowIo, options: 
   return { appended, refused, lastIndex: idx.length > 0 ? idx[idx.length - 1] : NaN, refreshed };
 }
 
+/** Nearest sample, held at the first or last sample beyond the index (bracket search from stress/stressSeries). */
 function nearestSample(tvdFt: Float64Array, z: number): number {
-  let lo = 0;
-  let hi = tvdFt.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (tvdFt[mid] <= z) lo = mid;
-    else hi = mid;
-  }
+  const lo = depthBracketIndex(tvdFt, z);
+  const hi = Math.min(lo + 1, tvdFt.length - 1);
   return Math.abs(tvdFt[hi] - z) < Math.abs(tvdFt[lo] - z) ? hi : lo;
 }
 

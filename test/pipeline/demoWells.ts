@@ -10,6 +10,7 @@ import { surveyPathAtMd } from "../../src/well/surveyPathAtMd.js";
 import type { Well } from "../../src/well/types.js";
 import type { PorePressurePredictionOptions } from "../../src/pipeline/predictPorePressure.js";
 import { mudlineTvdFt } from "../../src/well/depthReference.js";
+import { depthBracketIndex } from "../../src/stress/stressSeries.js";
 
 export const DEMO = resolve(__dirname, "..", "..", "demo-logs");
 
@@ -62,13 +63,8 @@ export function loadDemoWell(slug: string): DemoWell {
 
 /** Index of the sample nearest to each truth row (same grid, so exact in practice). */
 export function nearestIndex(tvdFt: Float64Array, depthFt: number): number {
-  let lo = 0;
-  let hi = tvdFt.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (tvdFt[mid] <= depthFt) lo = mid;
-    else hi = mid;
-  }
+  const lo = depthBracketIndex(tvdFt, depthFt);
+  const hi = Math.min(lo + 1, tvdFt.length - 1);
   return Math.abs(tvdFt[lo] - depthFt) <= Math.abs(tvdFt[hi] - depthFt) ? lo : hi;
 }
 
