@@ -45,22 +45,90 @@ function blockAlignedStarts(n: number, parts: number): number[] {
   return starts;
 }
 
+/**
+ * Idle workers per script URL, kept between calls so a repeated run pays neither thread
+ * start-up nor a cold JIT; unref'd while idle, so they never hold the process open.
+ */
+const idleWorkers = new Map<string, Worker[]>();
+let nextJobId = 1;
+
+function takeWorker(url: URL): Worker {
+  const idle = idleWorkers.get(url.href);
+  let worker = idle?.pop();
+  if (worker === undefined) {
+    const fresh = new Worker(url);
+    fresh.on("exit", () => {
+      const list = idleWorkers.get(url.href);
+      const at = list?.indexOf(fresh) ?? -1;
+      if (list !== undefined && at >= 0) list.splice(at, 1);
+    });
+    worker = fresh;
+  }
+  worker.ref();
+  return worker;
+}
+
+function releaseWorker(url: URL, worker: Worker): void {
+  worker.unref();
+  const list = idleWorkers.get(url.href) ?? [];
+  list.push(worker);
+  idleWorkers.set(url.href, list);
+}
+
+/**
+ * Stop the idle Monte Carlo worker threads (they are unref'd and never keep a process
+ * alive, so calling this is optional).
+ *
+ * @returns Promise resolved when every idle worker has stopped
+ * @example await closeUncertaintyWorkers()
+ */
+export async function closeUncertaintyWorkers(): Promise<void> {
+  const all = [...idleWorkers.values()].flat();
+  idleWorkers.clear();
+  await Promise.all(all.map((w) => w.terminate()));
+}
+
+type WorkerReply = { id: number; ok: boolean; result?: PressureUncertaintyResult; code?: string; message?: string; details?: ErrorDetails };
+
 function runInWorker(url: URL, msg: { input: PressureUncertaintyInput; startIndex: number; endIndex: number }): { promise: Promise<PressureUncertaintyResult>; stop: () => void } {
-  const worker = new Worker(url);
+  const worker = takeWorker(url);
+  const id = nextJobId++;
+  let cleanup = (): void => undefined;
   const promise = new Promise<PressureUncertaintyResult>((resolve, reject) => {
-    worker.once("message", (m: { ok: boolean; result?: PressureUncertaintyResult; code?: string; message?: string; details?: ErrorDetails }) => {
-      void worker.terminate();
+    const onMessage = (m: WorkerReply): void => {
+      if (m.id !== id) return;
+      cleanup();
+      releaseWorker(url, worker);
       if (m.ok && m.result !== undefined) resolve(m.result);
       else reject(new ShalepointError(m.code ?? "E_INTERNAL", m.message ?? "worker failed", m.details ?? {}));
-    });
-    worker.once("error", (e) => reject(e));
-    worker.once("exit", (code) => {
-      if (code !== 0) reject(new ShalepointError("E_INTERNAL", `uncertainty worker stopped with exit code ${code}`));
-    });
+    };
+    const onError = (e: Error): void => {
+      cleanup();
+      void worker.terminate();
+      reject(new ShalepointError("E_INTERNAL", `uncertainty worker failed: ${e.message}`));
+    };
+    const onExit = (code: number): void => {
+      cleanup();
+      reject(new ShalepointError("E_INTERNAL", `uncertainty worker stopped with exit code ${code}`));
+    };
+    cleanup = () => {
+      worker.off("message", onMessage);
+      worker.off("error", onError);
+      worker.off("exit", onExit);
+    };
+    worker.on("message", onMessage);
+    worker.on("error", onError);
+    worker.on("exit", onExit);
   });
   promise.catch(() => undefined); // a part that fails after another one already failed is not unhandled
-  worker.postMessage(msg);
-  return { promise, stop: () => void worker.terminate() };
+  worker.postMessage({ id, ...msg });
+  return {
+    promise,
+    stop: () => {
+      cleanup();
+      void worker.terminate();
+    },
+  };
 }
 
 /**

@@ -1,8 +1,8 @@
 /**
- * Worker-thread entry for {@link simulatePressureUncertaintyParallel}: receives
- * `{ input, startIndex, endIndex }`, runs simulatePressureUncertaintyPart (the pure core
- * kernel) and posts back `{ ok: true, result }` (arrays transferred, not copied) or
- * `{ ok: false, code, message, details }`.
+ * Worker-thread entry for {@link simulatePressureUncertaintyParallel}: for each message
+ * `{ id, input, startIndex, endIndex }` runs simulatePressureUncertaintyPart (the pure core
+ * kernel) and posts back `{ id, ok: true, result }` (arrays transferred, not copied) or
+ * `{ id, ok: false, code, message, details }`. The thread stays up for the next message.
  *
  * Node edge module (node:worker_threads); the computation itself stays in src/uncertainty.
  */
@@ -18,12 +18,13 @@ function transferList(result: PressureUncertaintyResult): ArrayBuffer[] {
   return [...seen];
 }
 
-parentPort?.on("message", (msg: Parameters<typeof simulatePressureUncertaintyPart>[0]) => {
+parentPort?.on("message", (msg: Parameters<typeof simulatePressureUncertaintyPart>[0] & { id: number }) => {
+  const id = msg.id;
   try {
     const result = simulatePressureUncertaintyPart(msg);
-    parentPort?.postMessage({ ok: true, result }, transferList(result));
+    parentPort?.postMessage({ id, ok: true, result }, transferList(result));
   } catch (e) {
     const err = e instanceof ShalepointError ? e : new ShalepointError("E_INTERNAL", String((e as Error)?.message ?? e));
-    parentPort?.postMessage({ ok: false, code: err.code, message: err.message, details: JSON.parse(JSON.stringify(err.details)) });
+    parentPort?.postMessage({ id, ok: false, code: err.code, message: err.message, details: JSON.parse(JSON.stringify(err.details)) });
   }
 });

@@ -3,13 +3,13 @@
  * (same draws, parts cut on 64-depth blocks, exact quantiles). The worker script is compiled
  * from src with esbuild into a temporary folder, as `npm run build` would place it in dist.
  */
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { build } from "esbuild";
-import { simulatePressureUncertaintyParallel } from "../../src/uncertainty-node/index.js";
+import { closeUncertaintyWorkers, simulatePressureUncertaintyParallel } from "../../src/uncertainty-node/index.js";
 import { simulatePressureUncertainty, type PressureUncertaintyInput } from "../../src/uncertainty/index.js";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
@@ -53,12 +53,15 @@ function wellInput(): PressureUncertaintyInput {
 }
 
 describe("simulatePressureUncertaintyParallel", () => {
-  it("equals simulatePressureUncertainty bit for bit with 2 and 3 threads", async () => {
+  afterAll(() => closeUncertaintyWorkers());
+
+  it("equals simulatePressureUncertainty bit for bit with 2 and 3 threads, and again on kept workers", async () => {
     // Own case (design property): same seed → same draws; parts start on 64-depth blocks.
+    // The last call (2 threads again) runs on a worker kept from the earlier calls.
     const url = await workerUrl();
     const input = wellInput();
     const serial = simulatePressureUncertainty(input);
-    for (const threads of [2, 3]) {
+    for (const threads of [2, 3, 2]) {
       const parallel = await simulatePressureUncertaintyParallel(input, { threads, workerUrl: url });
       expect(parallel).toEqual(serial);
     }
