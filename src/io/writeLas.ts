@@ -23,6 +23,105 @@ const WRAP_WIDTH = 80;
 /** 10^0 … 10^6, exact. */
 const P10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
 
+/** "0000" … "9999" etc.: the zero-padded fractional digits for 1 to 6 decimals, built on first use. */
+const FRACTION_DIGITS: (string[] | undefined)[] = [];
+
+function fractionDigits(d: number): string[] {
+  let t = FRACTION_DIGITS[d];
+  if (t === undefined) {
+    t = new Array<string>(P10[d]);
+    for (let k = 0; k < P10[d]; k++) t[k] = String(k).padStart(d, "0");
+    FRACTION_DIGITS[d] = t;
+  }
+  return t;
+}
+
+/**
+ * Fixed-decimal text, byte for byte what `x.toFixed(decimals)` gives (ECMAScript
+ * Number.prototype.toFixed: the integer n nearest to x·10^d, the larger on a tie, written with
+ * the point moved d places; "-" for x < 0, so −0.00001 → "-0.0000" and −0 → "0.0000"), only
+ * faster for the common case. Fast path for 1 ≤ d ≤ 4 and |x| < 10^6: y = |x|·10^d is then
+ * below 10^10 < 2^34, so the one rounding of the product is at most 2^−20 ≈ 9.5e−7 away
+ * from the exact |x|·10^d; when y's fraction is more than 1e−4 away from one half, Math.round(y) is
+ * the same integer as the exact rounding. Everything else (ties, large numbers, NaN, ±∞,
+ * other d) goes to `toFixed` itself.
+ * @param x any number
+ * @param decimals digits after the point, integer 0–100 (the fast path covers 1–4; typical 4)
+ * @returns the same string as `x.toFixed(decimals)`
+ * @throws RangeError as `toFixed` does for decimals outside 0–100
+ * @example formatFixedDecimals(5432.123456, 4) // "5432.1235"
+ * @example formatFixedDecimals(-0.00001, 4) // "-0.0000" (as toFixed)
+ */
+export function formatFixedDecimals(x: number, decimals: number): string {
+  if (decimals >= 1 && decimals <= 4 && Number.isInteger(decimals)) {
+    const neg = x < 0;
+    const ax = neg ? -x : x;
+    if (ax < 1e6) {
+      const scale = P10[decimals];
+      const y = ax * scale;
+      const r = Math.round(y);
+      const half = y - Math.floor(y) - 0.5;
+      if (half > 1e-4 || half < -1e-4) {
+        const frac = r % scale;
+        const text = String((r - frac) / scale) + "." + fractionDigits(decimals)[frac];
+        return neg ? "-" + text : text;
+      }
+    }
+  }
+  return x.toFixed(decimals);
+}
+
+/**
+ * Fixed-decimal ASCII bytes: put the text of {@link formatFixedDecimals}(x, decimals) — the
+ * same characters as `x.toFixed(decimals)` — into `buf` from index `at`, when x is on the
+ * fast path (1 ≤ decimals ≤ 4, |x| < 10^6, not within 1e−4 of a rounding tie); otherwise
+ * write nothing and return −1 so the caller can fall back to the string.
+ * @param buf output bytes; needs at least 12 free bytes from `at`
+ * @param at index of the first byte to write
+ * @param x value (typical 5432.123456)
+ * @param decimals digits after the point (typical 4)
+ * @returns the index after the last byte written, or −1 when nothing was written
+ * @throws nothing
+ * @example writeFixedDecimalsAscii(new Uint8Array(16), 0, -2.5, 4) // 7 (bytes "-2.5000")
+ */
+export function writeFixedDecimalsAscii(buf: Uint8Array, at: number, x: number, decimals: number): number {
+  if (!(decimals >= 1 && decimals <= 4)) return -1;
+  const neg = x < 0;
+  const ax = neg ? -x : x;
+  if (!(ax < 1e6)) return -1;
+  const scale = P10[decimals];
+  const y = ax * scale;
+  const half = y - Math.floor(y) - 0.5;
+  if (!(half > 1e-4 || half < -1e-4)) return -1;
+  const r = Math.round(y);
+  let frac = r % scale;
+  let whole = (r - frac) / scale;
+  if (neg) buf[at++] = 45; // "-"
+  // integer part: digits counted first, then written from the right
+  let digits = 1;
+  for (let t = whole; t >= 10; t = (t - (t % 10)) / 10) digits++;
+  let k = at + digits - 1;
+  do {
+    const dgt = whole % 10;
+    buf[k--] = 48 + dgt;
+    whole = (whole - dgt) / 10;
+  } while (whole > 0);
+  at += digits;
+  buf[at++] = 46; // "."
+  for (let q = at + decimals - 1; q >= at; q--) {
+    const dgt = frac % 10;
+    buf[q] = 48 + dgt;
+    frac = (frac - dgt) / 10;
+  }
+  return at + decimals;
+}
+
+/** Append ASCII text (numbers, the NULL value) to `buf` at `at`; returns the new end. */
+function putAscii(buf: Uint8Array, at: number, text: string): number {
+  for (let k = 0; k < text.length; k++) buf[at++] = text.charCodeAt(k);
+  return at;
+}
+
 /**
  * Text that reads back to exactly `x`. Fast path for short decimals (at most 6 decimals and
  * |x·10^k| < 2^53): with y = x·10^k an integer and y / 10^k === x, the decimal text of y with
@@ -30,7 +129,7 @@ const P10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
  * representable doubles — the same fast path the reader uses). Otherwise `String(x)`.
  */
 function formatNumber(x: number, precision: number | undefined): string {
-  if (precision !== undefined) return x.toFixed(precision);
+  if (precision !== undefined) return formatFixedDecimals(x, precision);
   if (Object.is(x, -0)) return "-0";
   for (let k = 0; k <= 6; k++) {
     const y = x * P10[k];
@@ -181,17 +280,25 @@ export function writeLas(las: LasFile, options: WriteLasOptions = {}): string {
   }
   out.push("~A");
 
-  // ---- data: format every value, then pad each column to its widest text ---------------------
-  const texts: string[][] = [];
+  // ---- data: format every value into one byte column per curve (no per-value strings), then
+  // pad each column to its widest text. Every character is ASCII, so bytes = characters.
+  const cols: { bytes: Uint8Array; end: Int32Array }[] = [];
   const widths: number[] = [];
   for (let j = 0; j < nCurves; j++) {
     const col = las.data[j];
-    const t: string[] = new Array(nRows);
+    let bytes = new Uint8Array(Math.max(64, nRows * 12));
+    const end = new Int32Array(nRows);
+    let at = 0;
     let w = 0;
     for (let i = 0; i < nRows; i++) {
+      if (bytes.length - at < 64) {
+        const bigger = new Uint8Array(bytes.length * 2);
+        bigger.set(bytes.subarray(0, at));
+        bytes = bigger;
+      }
+      const start = at;
       const x = col[i];
-      let s: string;
-      if (Number.isNaN(x)) s = nullText;
+      if (Number.isNaN(x)) at = putAscii(bytes, at, nullText);
       else if (!Number.isFinite(x)) {
         throw new ShalepointError("E_LAS_WRITE_VALUE", `curve ${las.curves[j].mnemonic} holds an infinite value`, {
           param: las.curves[j].mnemonic,
@@ -199,34 +306,67 @@ export function writeLas(las: LasFile, options: WriteLasOptions = {}): string {
           value: String(x),
           hint: "Replace ±Infinity by NaN (written as NULL) before writing.",
         });
-      } else s = formatNumber(x, precision);
-      t[i] = s;
-      if (s.length > w) w = s.length;
+      } else {
+        const fast = precision === undefined ? -1 : writeFixedDecimalsAscii(bytes, at, x, precision);
+        if (fast >= 0) at = fast;
+        else {
+          const text = formatNumber(x, precision);
+          if (bytes.length - at < text.length) {
+            const bigger = new Uint8Array((bytes.length + text.length) * 2);
+            bigger.set(bytes.subarray(0, at));
+            bytes = bigger;
+          }
+          at = putAscii(bytes, at, text);
+        }
+      }
+      end[i] = at;
+      if (at - start > w) w = at - start;
     }
-    texts.push(t);
+    cols.push({ bytes, end });
     widths.push(w);
   }
   const lines: string[] = [];
-  for (let i = 0; i < nRows; i++) {
-    if (!wrap) {
-      let s = texts[0][i].padStart(widths[0]);
-      for (let j = 1; j < nCurves; j++) s += " " + texts[j][i].padStart(widths[j]);
-      lines.push(s);
-    } else {
-      lines.push(texts[0][i]);
-      let s = "";
-      for (let j = 1; j < nCurves; j++) {
-        const v = texts[j][i].padStart(Math.min(widths[j], WRAP_WIDTH - 1));
-        if (s.length > 0 && s.length + 1 + v.length > WRAP_WIDTH) {
-          lines.push(s);
-          s = "";
-        }
-        s = s.length === 0 ? v : s + " " + v;
+  if (!wrap) {
+    // One buffer for the whole table: each row is every column right-aligned, one blank apart.
+    let rowWidth = nCurves; // blanks and the newline
+    for (const w of widths) rowWidth += w;
+    const table = new Uint8Array(nRows * rowWidth).fill(32);
+    for (let j = 0, offset = 0; j < nCurves; j++) {
+      const { bytes, end } = cols[j];
+      const w = widths[j];
+      let start = 0;
+      for (let i = 0; i < nRows; i++) {
+        const len = end[i] - start;
+        table.set(bytes.subarray(start, end[i]), i * rowWidth + offset + w - len);
+        start = end[i];
       }
-      if (s.length > 0) lines.push(s);
+      offset += w + 1;
     }
+    for (let i = 1; i <= nRows; i++) table[i * rowWidth - 1] = 10; // "\n"
+    return out.join("\n") + "\n" + asciiText(table);
+  }
+  const text = (j: number, i: number): string => String.fromCharCode(...cols[j].bytes.subarray(i === 0 ? 0 : cols[j].end[i - 1], cols[j].end[i]));
+  for (let i = 0; i < nRows; i++) {
+    lines.push(text(0, i));
+    let s = "";
+    for (let j = 1; j < nCurves; j++) {
+      const v = text(j, i).padStart(Math.min(widths[j], WRAP_WIDTH - 1));
+      if (s.length > 0 && s.length + 1 + v.length > WRAP_WIDTH) {
+        lines.push(s);
+        s = "";
+      }
+      s = s.length === 0 ? v : s + " " + v;
+    }
+    if (s.length > 0) lines.push(s);
   }
   return out.join("\n") + "\n" + (lines.length > 0 ? lines.join("\n") + "\n" : "");
+}
+
+const ASCII_DECODER = new TextDecoder();
+
+/** ASCII bytes as a string (UTF-8 decoding is the identity on ASCII). */
+function asciiText(bytes: Uint8Array): string {
+  return ASCII_DECODER.decode(bytes);
 }
 
 /** The step shared by all consecutive index values, or 0 when sampling is irregular. */

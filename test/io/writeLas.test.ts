@@ -8,7 +8,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { Las } from "las-js";
 import { readLas, type ReadLasOptions } from "../../src/io/readLas.js";
-import { writeLas } from "../../src/io/writeLas.js";
+import { formatFixedDecimals, writeLas } from "../../src/io/writeLas.js";
 import type { LasFile } from "../../src/io/lasTypes.js";
 import { ShalepointError } from "../../src/errors.js";
 
@@ -191,5 +191,71 @@ describe("writeLas errors", () => {
     expect(() => writeLas(inf)).toThrow(/infinite/);
     const short = { ...las, data: [las.data[0], Float64Array.from([1, 2])] };
     expect(() => writeLas(short)).toThrow(/different length/);
+  });
+});
+
+describe("formatFixedDecimals", () => {
+  // Outside reference: ECMAScript Number.prototype.toFixed (ECMA-262, §21.1.3.3 — published
+  // standard, as implemented by the running engine): the text must be identical, byte for byte.
+  it("formatFixedDecimals(x, d) gives exactly x.toFixed(d) on random, tie and edge values", () => {
+    let seed = 20261201; // deterministic LCG (Numerical Recipes constants), not Math.random
+    const rnd = (): number => ((seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 4294967296);
+    const values: number[] = [0, -0, NaN, Infinity, -Infinity, 5e-324, -1e-7, 1e21, 999999.99995, -999999.99995, 1e6, 0.00005, 1.00005, 2.5, -2.5];
+    for (let i = 0; i < 20000; i++) values.push((rnd() - 0.5) * 10 ** (rnd() * 12 - 5));
+    // decimal ties k/2·10^-d and values a hair either side of them
+    for (let k = -3000; k <= 3000; k++) for (const d of [1, 2, 3, 4]) values.push((k + 0.5) / 10 ** d, (k + 0.5) / 10 ** d + 1e-12, (k + 0.5) / 10 ** d - 1e-12, 5432 + (k + 0.5) / 10 ** d);
+    let mismatches = 0;
+    for (const d of [0, 1, 2, 3, 4, 6]) for (const x of values) if (formatFixedDecimals(x, d) !== x.toFixed(d)) mismatches++;
+    expect(mismatches).toBe(0);
+  });
+
+  it("formatFixedDecimals keeps toFixed's sign and tie rules (ECMA-262 §21.1.3.3, published)", () => {
+    // x < 0 prints "-" even when every digit is zero; −0 is not < 0
+    expect(formatFixedDecimals(-0.00001, 4)).toBe("-0.0000");
+    expect(formatFixedDecimals(-0, 4)).toBe("0.0000");
+    // exact tie: the larger n (0.25 and 0.125 are exact binary fractions)
+    expect(formatFixedDecimals(0.25, 1)).toBe("0.3");
+    expect(formatFixedDecimals(0.125, 2)).toBe("0.13");
+    // 1.005 is stored as 1.00499999999999989… so it rounds down (from memory, a well-known case)
+    expect(formatFixedDecimals(1.005, 2)).toBe("1.00");
+    // ordinary value; own case checked by hand: 5432.123456 → 5432.1235
+    expect(formatFixedDecimals(5432.123456, 4)).toBe("5432.1235");
+    expect(formatFixedDecimals(-12.00004, 4)).toBe("-12.0000");
+  });
+});
+
+describe("writeLas data layout with fixed decimals", () => {
+  it("writeLas(…, { precision: 4 }) writes each row as the toFixed(4) texts right-aligned to the column width, one blank apart", () => {
+    // Outside references: ECMA-262 Number.prototype.toFixed (published) for the digits and the
+    // LAS 2.0 ~A layout (CWLS 1992, published: one line per depth when WRAP = NO, NULL for
+    // missing); the expected table is built here independently, value by value.
+    let seed = 7;
+    const rnd = (): number => ((seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 4294967296);
+    const n = 3000;
+    const md = Float64Array.from({ length: n }, (_, i) => 4000 + 0.5 * i);
+    const pp = Float64Array.from({ length: n }, (_, i) => (i % 97 === 0 ? NaN : 1500 + 9000 * rnd()));
+    const small = Float64Array.from({ length: n }, (_, i) => (i % 5 === 0 ? -0.00001 : (rnd() - 0.5) * 1e-3));
+    const big = Float64Array.from({ length: n }, () => (rnd() - 0.5) * 1e8); // beyond the fast path
+    const data = [md, pp, small, big];
+    const las: LasFile = {
+      version: [],
+      well: [{ mnemonic: "NULL", unit: "", value: "-999.25", description: "missing value" }],
+      curves: ["DEPT", "PP", "SMALL", "BIG"].map((mnemonic) => ({ mnemonic, unit: "", value: "", description: mnemonic.toLowerCase() })),
+      parameters: [],
+      other: "",
+      data,
+      wrap: false,
+      nullValue: -999.25,
+    };
+    const texts = data.map((col) => Array.from(col, (x) => (Number.isNaN(x) ? "-999.25" : x.toFixed(4))));
+    const widths = texts.map((t) => Math.max(...t.map((s) => s.length)));
+    const rows = Array.from({ length: n }, (_, i) => texts.map((t, j) => t[i].padStart(widths[j])).join(" "));
+    const text = writeLas(las, { precision: 4 });
+    expect(text.slice(text.indexOf("~A\n") + 3)).toBe(rows.join("\n") + "\n");
+    // wrapped: the index alone on its line, then the other values (each at most 80 wide)
+    const wrapped = writeLas(las, { precision: 4, wrap: true }).split("\n");
+    const a = wrapped.indexOf("~A");
+    expect(wrapped[a + 1]).toBe(texts[0][0]);
+    expect(wrapped[a + 2]).toBe([1, 2, 3].map((j) => texts[j][0].padStart(widths[j])).join(" "));
   });
 });
