@@ -81,6 +81,27 @@ export function despikeLog(args: {
     out[i] = x;
     const lo = i - h > 0 ? i - h : 0;
     const hi = i + h < n - 1 ? i + h : n - 1;
+    if (winLo + 1 === lo && winHi + 1 === hi) {
+      // Steady slide by one sample: when the leaving and the entering values are both
+      // finite, replace one with the other in a single pass over the sorted window (only
+      // the values between the two positions move; the window holds the same values as
+      // after a removal and an insertion).
+      const vOut = values[winLo];
+      const vIn = values[hi];
+      if (vOut === vOut && vIn === vIn) {
+        let q = 0;
+        while (win[q] !== vOut) q++;
+        if (vIn >= vOut) {
+          // `<=`: like the insertion below, the entering value goes after equal values.
+          while (q + 1 < m && win[q + 1] <= vIn) { win[q] = win[q + 1]; q++; }
+        } else {
+          while (q > 0 && win[q - 1] > vIn) { win[q] = win[q - 1]; q--; }
+        }
+        win[q] = vIn;
+        winLo = lo;
+        winHi = hi;
+      }
+    }
     while (winLo < lo) {
       const v = values[winLo++];
       if (v === v) {
@@ -108,8 +129,12 @@ export function despikeLog(args: {
       const r = Math.abs(x - med);
       spike = false;
       if (r > minDev) {
+        // win is sorted, so c·|win[j] − med| never decreases going outward from the middle:
+        // the deviations with c·d < r form one contiguous run around `half`. Count it from
+        // the middle outward and stop as soon as it exceeds half (same test, fewer steps).
         let below = 0;
-        for (let j = 0; j < m; j++) if (c * Math.abs(win[j] - med) < r) below++;
+        for (let j = half; j >= 0 && c * Math.abs(win[j] - med) < r; j--) below++;
+        for (let j = half + 1; j < m && below <= half && c * Math.abs(win[j] - med) < r; j++) below++;
         spike = below > half;
       }
       if (spike) {
