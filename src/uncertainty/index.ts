@@ -1,6 +1,7 @@
 /**
  * Uncertainty: seeded Monte Carlo of pore pressure, fracture pressure and the mud-weight
- * window, with exact type-7 quantiles by selection.
+ * window, with exact type-7 quantiles (carried sorted order, or selection); depth parts that
+ * join bit for bit (the multi-core runner lives in src/uncertainty-node).
  *
  * Results are estimates for trained engineers: calibrate them to measured data and have
  * them reviewed; local regulations and licensed practice govern.
