@@ -7,7 +7,7 @@
  */
 import { mkdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { writeLas } from "../io/writeLas.js";
+import { formatFixedDecimals, writeFixedDecimalsAscii, writeLas } from "../io/writeLas.js";
 import type { LasFile, LasHeaderItem } from "../io/lasTypes.js";
 import { PSI_PER_FT_PER_PPG } from "../units/index.js";
 import { SAFETY_CAUTION_TEXT } from "../present/caution.js";
@@ -117,8 +117,7 @@ export function studyOutputCurves(w: StudyWellResult): StudyOutputCurve[] {
   return c;
 }
 
-function resultLas(w: StudyWellResult, result: StudyResult): LasFile {
-  const curves = studyOutputCurves(w);
+function resultLas(w: StudyWellResult, result: StudyResult, curves: StudyOutputCurve[]): LasFile {
   const item = (mnemonic: string, unit: string, value: string, description: string): LasHeaderItem => ({ mnemonic, unit, value, description });
   const oneLine = (t: string): string => t.replace(/[\r\n:]+/g, " ").trim();
   return {
@@ -137,22 +136,57 @@ function resultLas(w: StudyWellResult, result: StudyResult): LasFile {
       item("CFGSHA", "", result.provenance.configSha256, "SHA-256 of the study file"),
     ],
     other: ["Computed pore pressure and stress estimates (shalepoint).", oneLine(SAFETY_CAUTION_TEXT)].join("\n"),
-    data: curves.map((c) => Float64Array.from(c.values, (x) => (Number.isFinite(x) ? x : NaN))),
+    data: curves.map((c) => finiteOrNaN(c.values)),
     wrap: false,
     nullValue: -999.25,
   };
 }
 
-function csvNumber(x: number): string {
-  return Number.isFinite(x) ? x.toFixed(4) : "";
+/** A copy with ±Infinity turned into NaN (written as the LAS NULL value). */
+function finiteOrNaN(values: ArrayLike<number>): Float64Array {
+  const out = new Float64Array(values.length);
+  for (let i = 0; i < out.length; i++) {
+    const x = values[i];
+    out[i] = x - x === 0 ? x : NaN; // finite ⇔ x − x is 0
+  }
+  return out;
 }
 
-function resultCsv(w: StudyWellResult): string {
-  const curves = studyOutputCurves(w);
-  const lines = [curves.map((c) => c.csvHeader).join(",")];
-  const n = curves[0].values.length;
-  for (let i = 0; i < n; i++) lines.push(curves.map((c) => csvNumber(c.values[i])).join(","));
-  return lines.join("\n") + "\n";
+/**
+ * The CSV bytes: a header, then one row per sample, 4 decimals (the `toFixed(4)` text), empty
+ * when not finite. Written straight into one growing byte buffer (every character is ASCII
+ * except possibly in the header), so no string is made per value or per row.
+ */
+function resultCsv(curves: StudyOutputCurve[]): Uint8Array {
+  const columns = curves.map((c) => c.values);
+  const nCols = columns.length;
+  const n = columns[0].length;
+  const header = new TextEncoder().encode(curves.map((c) => c.csvHeader).join(",") + "\n");
+  let buf = new Uint8Array(header.length + n * nCols * 11 + 64);
+  buf.set(header);
+  let at = header.length;
+  const room = nCols * 40 + 8; // most a row can take before the next capacity check
+  for (let i = 0; i < n; i++) {
+    if (buf.length - at < room) {
+      const bigger = new Uint8Array(buf.length * 2 + room);
+      bigger.set(buf.subarray(0, at));
+      buf = bigger;
+    }
+    for (let j = 0; j < nCols; j++) {
+      if (j > 0) buf[at++] = 44; // ","
+      const x = columns[j][i];
+      if (!Number.isFinite(x)) continue;
+      const fast = writeFixedDecimalsAscii(buf, at, x, 4);
+      if (fast >= 0) {
+        at = fast;
+        continue;
+      }
+      const text = formatFixedDecimals(x, 4); // ≤ 1e21: plain digits, at most 27 characters
+      for (let k = 0; k < text.length; k++) buf[at++] = text.charCodeAt(k);
+    }
+    buf[at++] = 10; // "\n"
+  }
+  return buf.subarray(0, at);
 }
 
 const round = (x: number, d = 4): number | null => (Number.isFinite(x) ? Math.round(x * 10 ** d) / 10 ** d : null);
@@ -275,7 +309,9 @@ function fallbackReportHtml(result: StudyResult): string {
  *
  * Files: `<well-id>.result.las` and `<well-id>.result.csv` (oilfield units: ft, psi, ppg; 4 decimals;
  * see {@link studyOutputCurves}), `study-summary.json` ({@link studySummary}), `report.html`
- * and `pressure-chart.png` (first well's pressure chart, headless Chromium).
+ * and `pressure-chart.png` (first well's pressure chart, headless Chromium). Chromium is
+ * started first and runs while the other files are written; its file is renamed into place
+ * after them.
  *
  * @param result study result from runStudy
  * @param outDir output folder (absolute or relative to the working directory)
@@ -287,38 +323,60 @@ function fallbackReportHtml(result: StudyResult): string {
 export async function writeStudyOutputs(result: StudyResult, outDir: string, options: WriteStudyOutputsOptions = {}): Promise<StudyOutputFiles> {
   mkdirSync(outDir, { recursive: true });
   const files: StudyOutputFiles = { outDir, wellFiles: [], summary: join(outDir, "study-summary.json"), skipped: [] };
-  for (const w of result.wells) {
-    const las = join(outDir, `${w.id}.result.las`);
-    const csv = join(outDir, `${w.id}.result.csv`);
-    writeFileAtomic(las, writeLas(resultLas(w, result), { precision: 4 }));
-    writeFileAtomic(csv, resultCsv(w));
-    files.wellFiles.push({ id: w.id, las, csv });
-  }
-  writeFileAtomic(files.summary, JSON.stringify(studySummary(result), null, 2) + "\n");
-
   const wantReport = options.report ?? result.config.file.output.report ?? true;
   const wantPng = options.chartPng ?? result.config.file.output.chartPng ?? true;
-  if (!wantReport && !wantPng) return files;
-  const mod = await loadReportModule();
-  if (wantReport) {
-    const path = join(outDir, "report.html");
-    if (mod.renderStudyReport) writeFileAtomic(path, mod.renderStudyReport(studyReportInput(result, options.generatedAt)));
-    else {
-      writeFileAtomic(path, fallbackReportHtml(result));
-      files.skipped.push({ file: "report.html (full)", reason: "report renderer not available; wrote a short findings page instead" });
+  const mod: ReportModule = wantReport || wantPng ? await loadReportModule() : {};
+
+  // The PNG comes from a Chromium child process: start it first and write the other files
+  // while it runs (none of them depends on it; each file is written exactly as before).
+  const pngPath = join(outDir, "pressure-chart.png");
+  const pngTmp = `${pngPath}.tmp-${process.pid}.png`;
+  let png: Promise<{ written: boolean; reason?: string; error?: unknown }> | undefined;
+  const { renderChartPng, wellPressureFigure } = mod;
+  if (wantPng && renderChartPng && wellPressureFigure && result.wells.length > 0) {
+    // An error (figure or renderer) is held and thrown after the other files, as before.
+    png = (async () => renderChartPng({ figure: wellPressureFigure(result.wells[0], 900), outPath: pngTmp, widthPx: 900, heightPx: 900 }))().then(
+      (r) => ({ written: r.written, reason: r.reason }),
+      (error: unknown) => ({ written: false, error }),
+    );
+  }
+  try {
+    for (const w of result.wells) {
+      const las = join(outDir, `${w.id}.result.las`);
+      const csv = join(outDir, `${w.id}.result.csv`);
+      const curves = studyOutputCurves(w);
+      writeFileAtomic(las, writeLas(resultLas(w, result, curves), { precision: 4 }));
+      writeFileAtomic(csv, resultCsv(curves));
+      files.wellFiles.push({ id: w.id, las, csv });
     }
-    files.report = path;
+    writeFileAtomic(files.summary, JSON.stringify(studySummary(result), null, 2) + "\n");
+    if (wantReport) {
+      const path = join(outDir, "report.html");
+      if (mod.renderStudyReport) writeFileAtomic(path, mod.renderStudyReport(studyReportInput(result, options.generatedAt)));
+      else {
+        writeFileAtomic(path, fallbackReportHtml(result));
+        files.skipped.push({ file: "report.html (full)", reason: "report renderer not available; wrote a short findings page instead" });
+      }
+      files.report = path;
+    }
+  } catch (e) {
+    // Let Chromium finish (it writes into this folder) and remove its file before failing.
+    if (png) await png;
+    rmSync(pngTmp, { force: true });
+    throw e;
   }
   if (wantPng) {
-    const path = join(outDir, "pressure-chart.png");
-    if (mod.renderChartPng && mod.wellPressureFigure && result.wells.length > 0) {
-      const tmp = `${path}.tmp-${process.pid}.png`;
-      const r = await mod.renderChartPng({ figure: mod.wellPressureFigure(result.wells[0], 900), outPath: tmp, widthPx: 900, heightPx: 900 });
+    if (png) {
+      const r = await png;
+      if (r.error !== undefined) {
+        rmSync(pngTmp, { force: true });
+        throw r.error;
+      }
       if (r.written) {
-        renameSync(tmp, path);
-        files.chartPng = path;
+        renameSync(pngTmp, pngPath);
+        files.chartPng = pngPath;
       } else {
-        rmSync(tmp, { force: true });
+        rmSync(pngTmp, { force: true });
         files.skipped.push({ file: "pressure-chart.png", reason: r.reason ?? "chart renderer declined" });
       }
     } else files.skipped.push({ file: "pressure-chart.png", reason: "chart PNG renderer not available" });
