@@ -7,9 +7,9 @@
  * Johnson 1965 (JPT 17(6), SPE-1110) semilog sonic.
  */
 import { ShalepointError } from "../errors.js";
-import { checkSonicExponentialParams, sonicExponentialTrendUsPerFt } from "./sonicExponentialTrend.js";
-import { checkSonicLogLinearParams, sonicLogLinearTrendUsPerFt } from "./sonicLogLinearTrend.js";
-import { checkResistivityLogLinearParams, resistivityLogLinearTrendOhmM } from "./resistivityLogLinearTrend.js";
+import { checkSonicExponentialParams } from "./sonicExponentialTrend.js";
+import { checkSonicLogLinearParams } from "./sonicLogLinearTrend.js";
+import { checkResistivityLogLinearParams } from "./resistivityLogLinearTrend.js";
 import type { CompactionTrend, TrendParamsByKind } from "./trendTypes.js";
 
 /**
@@ -57,19 +57,43 @@ export function checkCompactionTrend(trend: CompactionTrend): void {
 export function evaluateCompactionTrend({ trend, bmlFt }: { trend: CompactionTrend; bmlFt: ArrayLike<number> }): Float64Array {
   checkCompactionTrend(trend);
   const segs = trend.segments;
-  const out = new Float64Array(bmlFt.length);
-  for (let i = 0; i < out.length; i++) {
+  const nSeg = segs.length;
+  const n = bmlFt.length;
+  const out = new Float64Array(n);
+  // Per-segment constants hoisted out of the sample loop; each loop below is the formula of
+  // sonicExponentialTrendUsPerFt / sonicLogLinearTrendUsPerFt / resistivityLogLinearTrendOhmM
+  // with the same operations in the same order (same values bit for bit).
+  const tops = new Float64Array(nSeg);
+  const c0 = new Float64Array(nSeg);
+  const c1 = new Float64Array(nSeg);
+  const c2 = new Float64Array(nSeg);
+  for (let k = 0; k < nSeg; k++) {
+    tops[k] = segs[k].topBmlFt;
+    if (trend.kind === "sonicExponential") {
+      const q = trend.segments[k].params;
+      c0[k] = q.dtMatrixUsPerFt;
+      c1[k] = q.dtMudlineUsPerFt - q.dtMatrixUsPerFt;
+      c2[k] = -q.decayPerFt;
+    } else if (trend.kind === "sonicLogLinear") {
+      const q = trend.segments[k].params;
+      c0[k] = q.dtMudlineUsPerFt;
+      c1[k] = q.log10SlopePerFt;
+    } else {
+      const q = trend.segments[k].params;
+      c0[k] = q.r0OhmM;
+      c1[k] = q.growthPerFt;
+    }
+  }
+  const form = trend.kind === "sonicExponential" ? 0 : trend.kind === "sonicLogLinear" ? 1 : 2;
+  for (let i = 0; i < n; i++) {
     const z = bmlFt[i];
     if (!(z >= 0)) {
       out[i] = NaN;
       continue;
     }
     let k = 0;
-    while (k + 1 < segs.length && z >= segs[k + 1].topBmlFt) k++;
-    let v: number;
-    if (trend.kind === "sonicExponential") v = sonicExponentialTrendUsPerFt({ bmlFt: z, params: trend.segments[k].params });
-    else if (trend.kind === "sonicLogLinear") v = sonicLogLinearTrendUsPerFt({ bmlFt: z, params: trend.segments[k].params });
-    else v = resistivityLogLinearTrendOhmM({ bmlFt: z, params: trend.segments[k].params });
+    while (k + 1 < nSeg && z >= tops[k + 1]) k++;
+    const v = form === 0 ? c0[k] + c1[k] * Math.exp(c2[k] * z) : form === 1 ? c0[k] * 10 ** (c1[k] * z) : c0[k] * Math.exp(c1[k] * z);
     if (!(Number.isFinite(v) && v > 0)) {
       throw new ShalepointError("E_TREND_NONFINITE", `the trend is not finite and positive at ${z} ft below mudline`, {
         param: `segments[${k}].params`, value: v, row: i, unit: trend.kind === "resistivityLogLinear" ? "ohm.m" : "us/ft",
