@@ -214,7 +214,8 @@ export function predictStressWindow(
     while (first < n && tvdFt[first] < firstShoe) first++;
     const sub = <T extends { subarray(a: number): T }>(a: T): T => a.subarray(first);
     casing = selectCasingPoints({
-      tvdFt: sub(Float64Array.from(tvdFt)),
+      // A Float64Array index is viewed, not copied (selectCasingPoints does not write to it).
+      tvdFt: sub(tvdFt instanceof Float64Array ? tvdFt : Float64Array.from(tvdFt)),
       lowerPsiPerFt: sub(window.lowerPsiPerFt),
       upperPsiPerFt: sub(window.upperPsiPerFt),
       upperCriterion: window.upperCriterion.slice(first),

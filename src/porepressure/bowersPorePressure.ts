@@ -182,6 +182,6 @@ export function bowersPorePressure(
     sigma[i] = s;
     raw[i] = sv - s;
   }
-  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Bowers");
+  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Bowers", true);
   return { ...done, effectiveStressPsi: sigma, sigmaMaxPsi: sigmaMax, vmaxFtPerS: vmax };
 }

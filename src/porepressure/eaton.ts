@@ -91,7 +91,7 @@ export function eatonPorePressure(input: EatonStressInputs & { ratio: ArrayLike<
     }
     raw[i] = sv - (sv - ph) * Math.pow(r, exponent);
   }
-  return finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Eaton");
+  return finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Eaton", true);
 }
 
 /**
@@ -120,15 +120,21 @@ export function eatonRatio(input: { log: EatonLog; observed: ArrayLike<number>; 
       allowed: "sonic | resistivity | dexponent",
     });
   }
-  const out = new Float64Array(observed.length);
-  for (let i = 0; i < out.length; i++) {
-    const o = observed[i];
-    const t = trend[i];
-    if (!(o > 0 && t > 0)) {
-      out[i] = NaN;
-      continue;
+  const n = observed.length;
+  const out = new Float64Array(n);
+  // The log kind is tested once, not per sample.
+  if (log === "sonic") {
+    for (let i = 0; i < n; i++) {
+      const o = observed[i];
+      const t = trend[i];
+      out[i] = o > 0 && t > 0 ? t / o : NaN;
     }
-    out[i] = log === "sonic" ? t / o : o / t;
+  } else {
+    for (let i = 0; i < n; i++) {
+      const o = observed[i];
+      const t = trend[i];
+      out[i] = o > 0 && t > 0 ? o / t : NaN;
+    }
   }
   return out;
 }

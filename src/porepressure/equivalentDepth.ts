@@ -175,7 +175,7 @@ export function equivalentDepthPorePressure(input: {
   const flags = new Uint8Array(n);
   if (!Number.isFinite(top) || n === 0) {
     for (let i = 0; i < n; i++) flags[i] = PP_FLAG_MISSING_INPUT;
-    const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth");
+    const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth", true);
     return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
   }
 
@@ -275,6 +275,6 @@ export function equivalentDepthPorePressure(input: {
     sig[i] = svE - phE;
     raw[i] = sv - (svE - phE);
   }
-  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth");
+  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth", true);
   return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
 }

@@ -131,8 +131,12 @@ export function checkLimitOptions(n: number, opts: PorePressureLimitOptions): vo
  * Pp < Ph → flag 4 and, with `floorAtHydrostatic`, Ph (flag 8); outside the calibrated
  * range → flag 32. Warnings are counted per flag kind.
  *
- * @param rawPsi raw pore pressure, psi (consumed: the returned `ppPsi` is a new array)
- * @param flags flags already set by the method (copied)
+ * @param rawPsi raw pore pressure, psi (consumed: the returned `ppPsi` is a new array,
+ *   or `rawPsi` itself with `inPlace`)
+ * @param flags flags already set by the method (copied, or updated in place with `inPlace`)
+ * @param inPlace default false; true when the caller owns `rawPsi` (a Float64Array) and
+ *   `flags` and does not use them afterwards: the limits are then applied in those arrays
+ *   (same values, two fewer allocations of the well's length)
  */
 export function finishPorePressure(
   rawPsi: ArrayLike<number>,
@@ -141,10 +145,12 @@ export function finishPorePressure(
   flags: Uint8Array,
   opts: PorePressureLimitOptions,
   methodName: string,
+  inPlace = false,
 ): PorePressureResult {
   const n = rawPsi.length;
-  const pp = new Float64Array(n);
-  const fl = new Uint8Array(flags);
+  // In place, pp[i] is written after rawPsi[i] is read, at the same index only.
+  const pp = inPlace && rawPsi instanceof Float64Array ? rawPsi : new Float64Array(n);
+  const fl = pp === rawPsi ? flags : new Uint8Array(flags);
   const range = opts.calibratedRangeTvdFt;
   const tvd = opts.tvdFt;
   for (let i = 0; i < n; i++) {
