@@ -93,25 +93,25 @@ export function writeFixedDecimalsAscii(buf: Uint8Array, at: number, x: number, 
   const y = ax * scale;
   const half = y - Math.floor(y) - 0.5;
   if (!(half > 1e-4 || half < -1e-4)) return -1;
-  const r = Math.round(y);
-  let frac = r % scale;
-  let whole = (r - frac) / scale;
+  const r = Math.round(y); // < 10^10: exact integer arithmetic below
+  const fracExact = r % scale;
+  // both parts fit in 32-bit integers (whole ≤ 10^6, frac < 10^4)
+  let whole = ((r - fracExact) / scale) | 0;
+  let frac = fracExact | 0;
   if (neg) buf[at++] = 45; // "-"
   // integer part: digits counted first, then written from the right
-  let digits = 1;
-  for (let t = whole; t >= 10; t = (t - (t % 10)) / 10) digits++;
-  let k = at + digits - 1;
-  do {
-    const dgt = whole % 10;
-    buf[k--] = 48 + dgt;
-    whole = (whole - dgt) / 10;
-  } while (whole > 0);
+  const digits = whole < 10 ? 1 : whole < 100 ? 2 : whole < 1000 ? 3 : whole < 10000 ? 4 : whole < 100000 ? 5 : whole < 1000000 ? 6 : 7;
+  for (let k = at + digits - 1; k >= at; k--) {
+    const q = (whole / 10) | 0;
+    buf[k] = 48 + whole - q * 10;
+    whole = q;
+  }
   at += digits;
   buf[at++] = 46; // "."
-  for (let q = at + decimals - 1; q >= at; q--) {
-    const dgt = frac % 10;
-    buf[q] = 48 + dgt;
-    frac = (frac - dgt) / 10;
+  for (let k = at + decimals - 1; k >= at; k--) {
+    const q = (frac / 10) | 0;
+    buf[k] = 48 + frac - q * 10;
+    frac = q;
   }
   return at + decimals;
 }
