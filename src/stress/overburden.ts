@@ -27,7 +27,7 @@
 import { PSI_PER_FT_PER_GCC, PSI_PER_FT_PER_PPG, PPG_PER_GCC } from "../units/index.js";
 import { ShalepointError, requireRange, requireSameLength, type Warning } from "../errors.js";
 import type { Datums } from "../well/types.js";
-import { gardnerDensityFromSlowness, type GardnerCoefficients } from "./gardnerDensity.js";
+import { GARDNER_COEFFICIENT_FT_PER_S, GARDNER_EXPONENT, type GardnerCoefficients } from "./gardnerDensity.js";
 import { powerLawAverageDensityPpg, powerLawPointDensityPpg } from "./nearMudlineDensity.js";
 
 /** Where the density at each sample came from (index into {@link OVERBURDEN_SOURCE_NAMES}). */
@@ -169,7 +169,18 @@ export function integrateOverburden(input: OverburdenInput): OverburdenResult {
   const rho = new Float64Array(n).fill(NaN);
   const svPsi = new Float64Array(n);
   const warnings: Warning[] = [];
-  const gardner = slownessUsPerFt ? gardnerDensityFromSlowness({ slownessUsPerFt, ...input.gardner }) : undefined;
+  // Gardner density is needed only where the density log is not used (above its top, bad
+  // hole, missing): evaluated there alone, with the formula of gardnerDensityFromSlowness
+  // (same operations, same values), instead of at every sample.
+  const gCoef = input.gardner?.coefficient;
+  const gExp = input.gardner?.exponent;
+  const gardnerCoefficient = gCoef === undefined ? GARDNER_COEFFICIENT_FT_PER_S : gCoef;
+  const gardnerExponent = gExp === undefined ? GARDNER_EXPONENT : gExp;
+  const gardnerAt = (i: number): number => {
+    if (!slownessUsPerFt) return NaN;
+    const dt = slownessUsPerFt[i];
+    return dt > 0 && Number.isFinite(dt) ? gardnerCoefficient * (1e6 / dt) ** gardnerExponent : NaN;
+  };
 
   // 1. air and water; first sediment sample
   let iSed = n;
@@ -202,8 +213,8 @@ export function integrateOverburden(input: OverburdenInput): OverburdenResult {
   // 3. point densities
   const PENDING = 255;
   for (let i = iSed; i < n; i++) {
-    const g = gardner ? gardner[i] : NaN;
     if (i < iTop) {
+      const g = nearMudline === "gardnerFromSonic" ? gardnerAt(i) : NaN;
       if (nearMudline === "gardnerFromSonic" && Number.isFinite(g)) {
         source[i] = OverburdenSource.nearMudlineGardner;
         rho[i] = g;
@@ -217,7 +228,10 @@ export function integrateOverburden(input: OverburdenInput): OverburdenResult {
     if (Number.isFinite(d) && d > 0 && !bad) {
       source[i] = OverburdenSource.densityLog;
       rho[i] = d;
-    } else if (Number.isFinite(g)) {
+      continue;
+    }
+    const g = gardnerAt(i);
+    if (Number.isFinite(g)) {
       source[i] = bad ? OverburdenSource.badHoleGardner : OverburdenSource.missingGardner;
       rho[i] = g;
     } else {
