@@ -10,7 +10,8 @@ const TARGETS = [
     show: (r, all) => `${(ref(all, 200000).medianMs / r.medianMs).toFixed(1)}×`,
   },
   { label: "whole single-well pipeline, 200,000 samples < 15 ms", stage: "whole pipeline (pore pressure + stress window)", samples: 200000, check: (r) => r.medianMs < 15 },
-  { label: "Monte Carlo 1,000 × 40,000 < 0.7 s (numpy reference as stated in the issue: 1.3 s; aim ≤ 0.65 s)", stage: "Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", samples: 40000, check: (r) => r.medianMs < 650 },
+  { label: "Monte Carlo 1,000 × 40,000 < 0.7 s, one thread (numpy reference as stated in the issue: 1.3 s; aim ≤ 0.65 s)", stage: "Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", samples: 40000, check: (r) => r.medianMs < 650 },
+  { label: "Monte Carlo 1,000 × 40,000 < 0.7 s, both cores", stage: "Monte Carlo 1,000 × 40,000, 2 threads (Eaton + Eaton 1969)", samples: 40000, check: (r) => r.medianMs < 650 },
   { label: "trend refit + pore-pressure recompute, 40,000 samples < 3 ms", stage: "trend refit + Eaton recompute", samples: 40000, check: (r) => r.medianMs < 3 },
   { label: "segmentation of a 200,000-sample profile < 200 ms", stage: "segmentation (segmentPressureProfile)", samples: 200000, check: (r) => r.medianMs < 200 },
 ];
@@ -116,11 +117,11 @@ export function renderBenchmarks({ machine, results, memory, loadStart, loadEnd,
   L.push("  `Math.pow`/`Math.exp` per sample in Eaton ×2, Bowers, the trend, UCS and the stress");
   L.push("  window. Meeting the target would need reused output buffers (an API change: stages would");
   L.push("  write into caller-owned arrays) and a cheaper despike than Hampel (a behaviour change).");
-  L.push("- Monte Carlo (src/uncertainty, not changed here): 40 million realisation-samples. With the");
-  L.push("  exponential-to-matrix sonic trend of the benchmark each costs two `exp` and a `log`; a CPU");
-  L.push("  profile (300 realisations) puts about 57 % of the time in the per-realisation trend and");
-  L.push("  Eaton fill (`fillEatonExponentialTrend`) and about 16 % in the quantile selection. A");
-  L.push("  log-linear trend needs one `exp` per sample and runs faster.");
+  L.push("- Monte Carlo: 40 million realisation-samples. The exponential trend is stepped in depth");
+  L.push("  (one `exp` per realisation-sample, the state recomputed directly every 64 depths) and the");
+  L.push("  quantiles carry the previous depth's sorted order (insertion re-sort, exact). On a loaded");
+  L.push("  machine two worker threads compete with other processes for the two cores; the");
+  L.push("  two-thread line is only meaningful when the load average is below the core count.");
   L.push("- LAS parse figures depend strongly on machine load: the reader is a single pass over the");
   L.push("  characters with no per-token strings.");
   L.push("");

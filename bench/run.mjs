@@ -180,14 +180,21 @@ async function benchSize(n) {
     record("segmentation (segmentPressureProfile)", n, await measure(() => sp.segmentPressureProfile({ tvdFt, ppPsi: base.ppPsi, hydrostaticPsi: base.hydrostaticPsi }), { runs: 7, warmup: 1 }));
   }
   if (want("monte") && n === 40000 && typeof sp.simulatePressureUncertainty === "function") {
-    const mc = () => sp.simulatePressureUncertainty({
+    const mcInputOf = () => ({
       tvdFt, bmlFt, overburdenPsi: base.overburden.svPsi, hydrostaticPsi: base.hydrostaticPsi, observed,
       porePressure: { kind: "eaton", exponent: { kind: "normal", mean: 3, std: 0.3 }, trend: base.sonicTrend.trend, trendCovariance: base.sonicTrend.diagnostics.map((d) => d.covariance ?? null) },
       fracture: { kind: "eaton1969", poissonRatio: { kind: "truncatedNormal", mean: 0.42, std: 0.03, min: 0.3, max: 0.49 } },
       overburdenFactor: { kind: "normal", mean: 1, std: 0.02 },
       realisations: 1000, seed: 7,
     });
+    const mc = () => sp.simulatePressureUncertainty(mcInputOf());
     record("Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", n, await measure(mc, { runs: 5, warmup: 1, minMs: 0 }));
+    // Same input on both cores: depth parts in worker threads (src/uncertainty-node), equal
+    // to the single-thread result bit for bit (tested).
+    const mcNode = await import(pathToFileURL(path.join(root, "dist/uncertainty-node/index.js")).href);
+    const mcInput = mcInputOf();
+    record("Monte Carlo 1,000 × 40,000, 2 threads (Eaton + Eaton 1969)", n, await measure(() => mcNode.simulatePressureUncertaintyParallel(mcInput, { threads: 2 }), { runs: 5, warmup: 1, minMs: 0 }));
+    await mcNode.closeUncertaintyWorkers();
   }
 }
 
