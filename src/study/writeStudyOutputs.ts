@@ -78,7 +78,11 @@ export function studyOutputCurves(w: StudyWellResult): StudyOutputCurve[] {
     for (let i = 0; i < n; i++) out[i] = p.tvdFt[i] > 0 ? psi[i] / p.tvdFt[i] / PSI_PER_FT_PER_PPG : NaN;
     return out;
   };
-  const toPpg = (g: ArrayLike<number>): Float64Array => Float64Array.from(g, (x) => x / PSI_PER_FT_PER_PPG);
+  const toPpg = (g: ArrayLike<number>): Float64Array => {
+    const out = new Float64Array(g.length);
+    for (let i = 0; i < out.length; i++) out[i] = g[i] / PSI_PER_FT_PER_PPG;
+    return out;
+  };
   const c: StudyOutputCurve[] = [
     { mnemonic: "DEPT", lasUnit: "F", csvHeader: "md_ft", description: "measured depth below rotary table", values: w.well.mdFt },
     { mnemonic: "TVD", lasUnit: "F", csvHeader: "tvd_ft", description: "true vertical depth below rotary table", values: p.tvdFt },
