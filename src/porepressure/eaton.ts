@@ -80,6 +80,10 @@ export function eatonPorePressure(input: EatonStressInputs & { ratio: ArrayLike<
   checkLimitOptions(n, input);
   const raw = new Float64Array(n);
   const flags = new Uint8Array(n);
+  // r^n for r > 0: r·r·r for the published sonic n = 3, exp(n·ln r) otherwise. Both are
+  // several times faster than Math.pow and agree with it to a few units in the last place
+  // (relative ≲ (1 + n·|ln r|)·2.2e-16, i.e. below 1e-11 psi on Pp for r in (0.2, 5)).
+  const cube = exponent === 3;
   for (let i = 0; i < n; i++) {
     const sv = overburdenPsi[i];
     const ph = hydrostaticPsi[i];
@@ -89,7 +93,8 @@ export function eatonPorePressure(input: EatonStressInputs & { ratio: ArrayLike<
       flags[i] = PP_FLAG_MISSING_INPUT;
       continue;
     }
-    raw[i] = sv - (sv - ph) * Math.pow(r, exponent);
+    const rn = cube ? r * r * r : Math.exp(exponent * Math.log(r));
+    raw[i] = sv - (sv - ph) * rn;
   }
   return finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Eaton", true);
 }
