@@ -59,9 +59,13 @@ export function requireBowersParameters(p: BowersParameters, u?: number): number
 export function virginVelocityRaw(sigmaPsi: number, a: number, b: number, v0: number): number {
   return sigmaPsi >= 0 ? v0 + a * Math.pow(sigmaPsi, b) : NaN;
 }
-/** σ = ((V − V0)/A)^(1/B); V < V0 → NaN. */
+/**
+ * σ = ((V − V0)/A)^(1/B); V < V0 → NaN. The power is taken as exp(ln(x)·(1/B)) (x ≥ 0),
+ * several times faster than Math.pow per sample and equal to it within a few units in the
+ * last place (relative ≲ (1 + |ln x|/B)·2.2e-16).
+ */
 export function virginStressRaw(vFtPerS: number, a: number, b: number, v0: number): number {
-  return vFtPerS >= v0 ? Math.pow((vFtPerS - v0) / a, 1 / b) : NaN;
+  return vFtPerS >= v0 ? Math.exp(Math.log((vFtPerS - v0) / a) * (1 / b)) : NaN;
 }
 /** V = V0 + A[σmax(σ/σmax)^(1/U)]^B. */
 export function unloadingVelocityRaw(sigmaPsi: number, sigmaMaxPsi: number, a: number, b: number, u: number, v0: number): number {
@@ -71,7 +75,8 @@ export function unloadingVelocityRaw(sigmaPsi: number, sigmaMaxPsi: number, a: n
 /** σ = σmax [((V − V0)/A)^(1/B) / σmax]^U; V < V0 → NaN. */
 export function unloadingStressRaw(vFtPerS: number, sigmaMaxPsi: number, a: number, b: number, u: number, v0: number): number {
   if (!(vFtPerS >= v0)) return NaN;
-  return sigmaMaxPsi * Math.pow(Math.pow((vFtPerS - v0) / a, 1 / b) / sigmaMaxPsi, u);
+  // Powers as exp(ln·exponent), as in virginStressRaw.
+  return sigmaMaxPsi * Math.exp(Math.log(Math.exp(Math.log((vFtPerS - v0) / a) * (1 / b)) / sigmaMaxPsi) * u);
 }
 
 // ---- checked, documented scalar API -----------------------------------------------------
