@@ -21,7 +21,9 @@ export function ucsFromSlownessHorsrud2001(dtUsPerFt: ArrayLike<number>): Float6
   const out = new Float64Array(dtUsPerFt.length);
   for (let i = 0; i < out.length; i++) {
     const dt = dtUsPerFt[i];
-    out[i] = dt > 0 ? mpaToPsi(0.77 * (FT_US_TO_KM_S / dt) ** 2.93) : NaN;
+    // Vp^2.93 as exp(2.93·ln Vp): several times faster than `**` per sample, equal to it
+    // within a few units in the last place.
+    out[i] = dt > 0 ? mpaToPsi(0.77 * Math.exp(2.93 * Math.log(FT_US_TO_KM_S / dt))) : NaN;
   }
   return out;
 }
