@@ -222,8 +222,7 @@ function updateShalePick(
   const cutFt = cutKey * wFt;
   // Tail slice start: the bed rule needs beds reaching the cut to be seen over minBed + a step,
   // and the GR despike needs DESPIKE_HALF samples of lead.
-  let t = 0;
-  while (t < n && tvdFt[t] < cutFt - minBed - 2 * maxStep) t++;
+  const t = countWhile(n, (i) => tvdFt[i] < cutFt - minBed - 2 * maxStep);
   const s = Math.max(0, t - DESPIKE_HALF - 1);
   const sliceCurves: Record<string, Float64Array> = {};
   for (const [k, v] of Object.entries(pointCurves)) sliceCurves[k] = v.subarray(s);
@@ -281,10 +280,20 @@ function updateShalePick(
   return { pick: { isShale, grUsedApi, spikeIndex: Int32Array.from(spikes), points, warnings }, cutKeyDepthFt: cutFt };
 }
 
+/**
+ * Length of the leading run of indices for which `ok` holds, for a predicate that holds on a
+ * prefix and then never again (a condition on a non-decreasing depth array): a binary search,
+ * the same count as stepping from 0.
+ */
 function countWhile(n: number, ok: (p: number) => boolean): number {
-  let p = 0;
-  while (p < n && ok(p)) p++;
-  return p;
+  let lo = 0; // ok holds below lo
+  let hi = n; // ok fails at hi (or hi = n)
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (ok(mid)) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** Shale line refreshed from the last kept point with a value: returns the line and its restart index. */
@@ -298,8 +307,7 @@ function updateShaleLine(
 ): { line: Float64Array; from: number } {
   let zKeep = -Infinity;
   for (let p = 0; p < points.tvdFt.length && points.tvdFt[p] < keptBelowFt; p++) if (Number.isFinite(values[p])) zKeep = points.tvdFt[p];
-  let from = 0;
-  while (from < tvdFt.length && !(tvdFt[from] > zKeep)) from++;
+  const from = countWhile(tvdFt.length, (i) => !(tvdFt[i] > zKeep));
   const line = grow(oldLine, tvdFt.length);
   const tail = interpolateShaleLine({ pointTvdFt: points.tvdFt, pointValues: values, tvdFt: tvdFt.subarray(from), maxGapFt });
   line.set(tail, from);
