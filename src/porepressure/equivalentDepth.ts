@@ -196,6 +196,7 @@ export function equivalentDepthPorePressure(input: {
   }
 
   let cursor = 0;
+  let hintA = 0;
   for (let i = 0; i < n; i++) {
     const z = tvdFt[i];
     const x = observed[i];
@@ -238,15 +239,43 @@ export function equivalentDepthPorePressure(input: {
     if (sampledZ !== undefined && sampledV !== undefined) {
       // Sampled trend: binary search for the last trend sample with g ≤ 0, then the root of
       // the linear piece after it (exact for the piecewise-linear trend), kept in [top, z].
+      // g(k) = (trend[k] − x)·s never decreases with k (strictly monotone trend), so the
+      // last k with g ≤ 0 is unique: it is bracketed by galloping from the previous
+      // sample's answer (the shale line varies slowly with depth), then bisected. Same
+      // index as a bisection over the whole trend.
+      const last = sampledZ.length - 1;
       let a = 0;
-      let b = sampledZ.length - 1;
+      let b = last;
       if ((sampledV[a] - x) * s > 0) b = a;
       else if ((sampledV[b] - x) * s <= 0) a = b;
+      else {
+        // Here g(0) ≤ 0 < g(last).
+        const h = hintA < last ? hintA : last - 1;
+        let step = 1;
+        if ((sampledV[h] - x) * s <= 0) {
+          a = h;
+          b = h + 1;
+          while (b < last && (sampledV[b] - x) * s <= 0) {
+            a = b;
+            step *= 2;
+            b = a + step < last ? a + step : last;
+          }
+        } else {
+          b = h;
+          a = h > 0 ? h - 1 : 0;
+          while (a > 0 && (sampledV[a] - x) * s > 0) {
+            b = a;
+            step *= 2;
+            a = b - step > 0 ? b - step : 0;
+          }
+        }
+      }
       while (b - a > 1) {
         const mid = (a + b) >> 1;
         if ((sampledV[mid] - x) * s <= 0) a = mid;
         else b = mid;
       }
+      hintA = a;
       const dv = sampledV[b] - sampledV[a];
       zE = a === b || dv === 0 ? sampledZ[a] : sampledZ[a] + ((x - sampledV[a]) / dv) * (sampledZ[b] - sampledZ[a]);
       if (!(zE >= top)) zE = top;
