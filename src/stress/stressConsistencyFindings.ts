@@ -117,14 +117,25 @@ export function stressConsistencyFindings(args: {
   });
 
   // 3. Convergence: least stress − Pp falling with depth.
-  const falling = new Uint8Array(n);
-  for (let i = 1; i < n; i++) {
-    const d0 = least[i - 1] - ppPsi[i - 1];
-    const d1 = least[i] - ppPsi[i];
-    falling[i] = d1 < d0 ? 1 : 0;
-  }
-  for (const [a, b] of runsOf(falling)) {
+  // Runs of falling margin are walked in place (the margin wiggles sample to sample, so
+  // most runs are short: no array of runs is built for them).
+  let a = -1;
+  let dPrev = n > 0 ? least[0] - ppPsi[0] : NaN;
+  for (let i = 1; i <= n; i++) {
+    let on = false;
+    if (i < n) {
+      const d1 = least[i] - ppPsi[i];
+      on = d1 < dPrev;
+      dPrev = d1;
+    }
+    if (on) {
+      if (a < 0) a = i;
+      continue;
+    }
+    if (a < 0) continue;
+    const b = i - 1;
     const start = a - 1; // the run compares with the sample above its first member
+    a = -1;
     if (b - start + 1 < minRun) continue;
     const m0 = least[start] - ppPsi[start];
     const m1 = least[b] - ppPsi[b];
