@@ -63,6 +63,43 @@ function pieceValue(x: ArrayLike<number>, y: ArrayLike<number>, lo: number, xq: 
 }
 
 /** Linear interpolation in a non-decreasing abscissa; NaN outside [x0, xn-1]. */
+/**
+ * Same result as bracketIndex(x, xq), found by galloping from `hint` (a previous answer)
+ * before bisecting: x is non-decreasing, so "x[k] ≤ xq" holds on a prefix and bracketIndex
+ * returns the last k of that prefix, capped at n − 2 (n ≥ 2).
+ */
+function bracketIndexNear(x: ArrayLike<number>, xq: number, hint: number): number {
+  const n = x.length;
+  if (!(n > 0 && xq >= x[0] && xq <= x[n - 1])) return -1;
+  if (n === 1) return 0;
+  // Find lo ≤ n − 2 with x[lo] ≤ xq and hi = n − 1 or x[hi] > xq, then bisect as bracketIndex.
+  let lo = hint > 0 && hint <= n - 2 ? hint : 0;
+  let hi: number;
+  let step = 1;
+  if (x[lo] <= xq) {
+    hi = lo + 1;
+    while (hi < n - 1 && x[hi] <= xq) {
+      lo = hi;
+      step *= 2;
+      hi = lo + step < n - 1 ? lo + step : n - 1;
+    }
+  } else {
+    hi = lo;
+    lo = lo - 1;
+    while (lo > 0 && x[lo] > xq) {
+      hi = lo;
+      step *= 2;
+      lo = hi - step > 0 ? hi - step : 0;
+    }
+  }
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (x[mid] <= xq) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
 function interpolate(x: ArrayLike<number>, y: ArrayLike<number>, xq: number): number {
   const lo = bracketIndex(x, xq);
   return lo < 0 ? NaN : pieceValue(x, y, lo, xq);
@@ -197,6 +234,7 @@ export function equivalentDepthPorePressure(input: {
 
   let cursor = 0;
   let hintA = 0;
+  let hintLo = 0;
   for (let i = 0; i < n; i++) {
     const z = tvdFt[i];
     const x = observed[i];
@@ -293,7 +331,8 @@ export function equivalentDepthPorePressure(input: {
       zE = 0.5 * (lo + hi);
     }
     // Sv and Ph at Ze share one search of the depth index.
-    const lo = bracketIndex(tvdFt, zE);
+    const lo = bracketIndexNear(tvdFt, zE, hintLo);
+    if (lo >= 0) hintLo = lo;
     const svE = lo < 0 ? NaN : pieceValue(tvdFt, overburdenPsi, lo, zE);
     const phE = lo < 0 ? NaN : pieceValue(tvdFt, hydrostaticPsi, lo, zE);
     if (!(Number.isFinite(svE) && Number.isFinite(phE))) {
