@@ -8,7 +8,7 @@
  * Run after a build:   npm run -s build && node bench/run.mjs
  * Options: --quick (fewer runs, no file written unless --write), --write, --only=<substring>
  *
- * Timing: warm-up runs (JIT), then at least `runs` timed runs and at least `minMs` of
+ * Timing (tinybench): warm-up runs (JIT), then at least `runs` timed runs and at least `minMs` of
  * wall time; median, interquartile range (p25–p75) and min are reported. Speed is measured
  * here only, never asserted in tests.
  */
@@ -36,6 +36,7 @@ if (process.argv[2] === "--memory-probe") {
 
 const sp = await import(pathToFileURL(path.join(root, "dist/index.js")).href);
 const { Las } = await import("las-js");
+const { Bench } = await import("tinybench");
 
 // ---------------------------------------------------------------------------------------
 // harness
@@ -48,22 +49,34 @@ var sink = 0; // var: the memory probe runs before this line is reached
 function consume(r) {
   if (r && typeof r === "object") sink += Object.keys(r).length;
 }
+/**
+ * Time one stage with tinybench: `warmup` untimed calls, then at least `runs` timed calls
+ * and at least `minMs` of timed work (capped at `maxMs`). Median, p25–p75 and min come from
+ * the retained latency samples (tinybench reports p50/p75 but not p25).
+ */
 async function measure(fn, { warmup = 3, runs = 15, minMs = 300, maxMs = 20000 } = {}) {
   if (quick) {
     warmup = Math.min(warmup, 1);
     runs = Math.min(runs, 5);
     minMs = 0;
   }
-  for (let i = 0; i < warmup; i++) consume(await fn());
-  const times = [];
-  const t0 = performance.now();
-  while (times.length < runs || (performance.now() - t0 < minMs && times.length < 1000)) {
-    const s = performance.now();
-    consume(await fn());
-    times.push(performance.now() - s);
-    if (performance.now() - t0 > maxMs && times.length >= 3) break;
-  }
-  times.sort((a, b) => a - b);
+  const bench = new Bench({
+    iterations: runs,
+    time: minMs,
+    warmup: warmup > 0,
+    warmupIterations: warmup,
+    warmupTime: 0,
+    retainSamples: true,
+    throws: true,
+  });
+  bench.add("stage", async () => consume(await fn()));
+  const started = performance.now();
+  await bench.run();
+  const task = bench.tasks[0];
+  const latency = task.result?.latency;
+  if (!latency || !latency.samples || latency.samples.length === 0) throw new Error(`no samples for a stage (${task.result?.state ?? "unknown state"})`);
+  if (performance.now() - started > maxMs) console.warn(`  (a stage took ${(performance.now() - started).toFixed(0)} ms in all)`);
+  const times = Array.from(latency.samples).sort((a, b) => a - b);
   return { medianMs: quantile(times, 0.5), p25Ms: quantile(times, 0.25), p75Ms: quantile(times, 0.75), minMs: times[0], runs: times.length, load1: os.loadavg()[0] };
 }
 
