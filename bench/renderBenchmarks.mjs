@@ -75,7 +75,7 @@ export function renderBenchmarks({ machine, results, memory, loadStart, loadEnd,
   }
   L.push("## All stages");
   L.push("");
-  L.push("Median, interquartile range (p25–p75) and fastest run, in ms, after warm-up runs.");
+  L.push("Median, interquartile range (p25–p75) and fastest run, in ms, after warm-up runs (timed with tinybench).");
   L.push("");
   L.push("Samples: the demo-study rows count wells, not samples.");
   L.push("");
