@@ -44,7 +44,7 @@ import { eatonPorePressure, eatonRatio, EATON_RESISTIVITY_EXPONENT, EATON_SONIC_
 import { bowersPorePressure, velocityAtDepth } from "../porepressure/bowersPorePressure.js";
 import { equivalentDepthPorePressure } from "../porepressure/equivalentDepth.js";
 import { velocityFromSlownessLog } from "../porepressure/velocityFromSlowness.js";
-import { flagWarnings, type PorePressureResult } from "../porepressure/porePressureFlags.js";
+import { flagWarnings, splicedFlagWarnings, type PorePressureResult } from "../porepressure/porePressureFlags.js";
 import {
   predictPorePressure,
   type PorePressurePrediction,
@@ -350,13 +350,22 @@ function updateTrend(
   return { outcome: { ...fitted, values: evaluateCompactionTrend({ trend: fitted.trend, bmlFt }) }, from: 0 };
 }
 
-function spliceResult<T extends PorePressureResult>(old: T | undefined, tail: PorePressureResult, from: number, n: number): PorePressureResult {
+/**
+ * The old result above `from` and the recomputed tail below, with the flag warnings of the
+ * whole well: counted again only over the recomputed part, from the old counts (same
+ * warnings as flagWarnings on the spliced flags).
+ */
+function spliceResult<T extends PorePressureResult>(old: T | undefined, tail: PorePressureResult, from: number, n: number, tvdFt: Float64Array, methodName: string): PorePressureResult {
   const ppPsi = old ? grow(old.ppPsi, n) : new Float64Array(n);
   const flags = new Uint8Array(n);
   if (old) flags.set(old.flags.subarray(0, Math.min(from, old.flags.length)));
   ppPsi.set(tail.ppPsi, from);
   flags.set(tail.flags, from);
-  return { ppPsi, flags, warnings: [] };
+  const warnings =
+    old && from <= old.flags.length
+      ? splicedFlagWarnings({ oldFlags: old.flags, oldWarnings: old.warnings, flags, from, tvdFt, methodName })
+      : flagWarnings(flags, tvdFt, methodName);
+  return { ppPsi, flags, warnings };
 }
 
 /**
@@ -440,16 +449,16 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     const exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
     const ratio = eatonRatio({ log: "sonic", observed: sub(shaleLine.dtUsPerFt, f), trend: sub(sonic.outcome.values, f) });
     const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
-    const r = spliceResult(old.methods.eatonSonic, tail, f, n);
-    methods.eatonSonic = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Eaton"), exponent };
+    const r = spliceResult(old.methods.eatonSonic, tail, f, n, tvdFt, "Eaton");
+    methods.eatonSonic = { ...r, exponent };
   }
   if (options.eatonResistivity && resistivity.outcome && shaleLine.resOhmM) {
     const f = Math.min(from, resistivity.from);
     const exponent = options.eatonResistivity.exponent ?? EATON_RESISTIVITY_EXPONENT;
     const ratio = eatonRatio({ log: "resistivity", observed: sub(shaleLine.resOhmM, f), trend: sub(resistivity.outcome.values, f) });
     const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
-    const r = spliceResult(old.methods.eatonResistivity, tail, f, n);
-    methods.eatonResistivity = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Eaton"), exponent };
+    const r = spliceResult(old.methods.eatonResistivity, tail, f, n, tvdFt, "Eaton");
+    methods.eatonResistivity = { ...r, exponent };
   }
   if (options.bowers && shaleLine.dtUsPerFt) {
     const { a, b, v0FtPerS } = options.bowers;
@@ -461,10 +470,10 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
     const velocity = velocityFromSlownessLog(sub(shaleLine.dtUsPerFt, f));
     const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: velocity, tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
-    const r = spliceResult(old.methods.bowers, tail, f, n);
+    const r = spliceResult(old.methods.bowers, tail, f, n, tvdFt, "Bowers");
     const es = f > 0 && old.methods.bowers ? grow(old.methods.bowers.effectiveStressPsi, n) : new Float64Array(n);
     es.set(tail.effectiveStressPsi, f);
-    methods.bowers = { ...r, warnings: flagWarnings(r.flags, tvdFt, "Bowers"), effectiveStressPsi: es, sigmaMaxPsi: tail.sigmaMaxPsi, vmaxFtPerS: tail.vmaxFtPerS, a, b, u: unloading?.u ?? 1 };
+    methods.bowers = { ...r, effectiveStressPsi: es, sigmaMaxPsi: tail.sigmaMaxPsi, vmaxFtPerS: tail.vmaxFtPerS, a, b, u: unloading?.u ?? 1 };
   }
   if (options.equivalentDepth && sonic.outcome && shaleLine.dtUsPerFt) {
     let first = 0;
@@ -495,7 +504,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
       ed.flags.set(oldEd.flags.subarray(0, f));
       ed.equivalentDepthFt.set(oldEd.equivalentDepthFt.subarray(0, f));
       ed.effectiveStressPsi.set(oldEd.effectiveStressPsi.subarray(0, f));
-      methods.equivalentDepth = { ...ed, warnings: flagWarnings(ed.flags, tvdFt, "Equivalent depth") };
+      // Flags above f are the old ones: count again only from f on.
+      methods.equivalentDepth = { ...ed, warnings: splicedFlagWarnings({ oldFlags: oldEd.flags, oldWarnings: oldEd.warnings, flags: ed.flags, from: f, tvdFt, methodName: "Equivalent depth" }) };
     } else methods.equivalentDepth = ed;
   }
   const warnings: Warning[] = [...ob.result.warnings, ...shale.warnings];

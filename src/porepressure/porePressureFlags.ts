@@ -182,37 +182,110 @@ export function finishPorePressure(
   return { ppPsi: pp, flags: fl, warnings: flagWarnings(fl, tvd, methodName) };
 }
 
+/** Warning-carrying flag bits, in the order the warnings are listed (FLAG_TEXT order). */
+const WARNING_BITS: ReadonlyArray<{ bit: number; code: string; text: string }> = FLAG_TEXT.filter(
+  ([bit]) => PP_FLAG_WARNING_CODES[bit] !== undefined,
+).map(([bit, text]) => ({ bit, code: PP_FLAG_WARNING_CODES[bit], text }));
+
+/**
+ * Histogram of the flag bytes in flags[from, to): how many samples carry each byte value
+ * and the first index of each value. One pass, one increment per flagged sample.
+ */
+function flagByteHistogram(flags: Uint8Array, from: number, to: number): { hist: Int32Array; first: Int32Array } {
+  const hist = new Int32Array(256);
+  const first = new Int32Array(256);
+  for (let i = from; i < to; i++) {
+    const f = flags[i];
+    if (f === 0) continue;
+    if (hist[f]++ === 0) first[f] = i;
+  }
+  return { hist, first };
+}
+
+/** Count and first index of the samples carrying `bit`, from a byte histogram. */
+function bitTally(h: { hist: Int32Array; first: Int32Array }, bit: number): { count: number; first: number } {
+  let count = 0;
+  let first = -1;
+  for (let v = bit; v < 256; v++) {
+    if ((v & bit) === 0 || h.hist[v] === 0) continue;
+    count += h.hist[v];
+    if (first < 0 || h.first[v] < first) first = h.first[v];
+  }
+  return { count, first };
+}
+
+function flagWarning(code: string, text: string, count: number, first: number, tvdFt: ArrayLike<number> | undefined, methodName: string): Warning {
+  const w: Warning = {
+    code,
+    message: `${methodName}: ${count} sample(s) ${text}; first at sample ${first}`,
+    index: first,
+    count,
+  };
+  if (tvdFt !== undefined && Number.isFinite(tvdFt[first])) w.depthFt = tvdFt[first];
+  return w;
+}
+
 /** One counted warning per problem flag kind present in `flags`. */
 export function flagWarnings(flags: Uint8Array, tvdFt: ArrayLike<number> | undefined, methodName: string): Warning[] {
   const out: Warning[] = [];
-  // One pass over the flags: count and first index per bit (most samples carry no flag).
-  const counts = new Int32Array(8);
-  const firsts = new Int32Array(8).fill(-1);
-  for (let i = 0; i < flags.length; i++) {
-    const f = flags[i];
-    if (f === 0) continue;
-    for (let b = 0; b < 8; b++) {
-      if ((f & (1 << b)) !== 0) {
-        if (firsts[b] < 0) firsts[b] = i;
-        counts[b]++;
-      }
-    }
-  }
-  for (const [bit, text] of FLAG_TEXT) {
-    const code = PP_FLAG_WARNING_CODES[bit];
-    if (code === undefined) continue;
-    const b = 31 - Math.clz32(bit);
-    const count = counts[b];
-    const first = firsts[b];
+  // One pass over the flags into a histogram of flag bytes (most samples carry no flag);
+  // each bit's count and first index then come from the at most 255 byte values.
+  const h = flagByteHistogram(flags, 0, flags.length);
+  for (const { bit, code, text } of WARNING_BITS) {
+    const { count, first } = bitTally(h, bit);
     if (count === 0) continue;
-    const w: Warning = {
-      code,
-      message: `${methodName}: ${count} sample(s) ${text}; first at sample ${first}`,
-      index: first,
-      count,
-    };
-    if (tvdFt !== undefined && Number.isFinite(tvdFt[first])) w.depthFt = tvdFt[first];
-    out.push(w);
+    out.push(flagWarning(code, text, count, first, tvdFt, methodName));
+  }
+  return out;
+}
+
+/**
+ * Flag warnings of a result whose flags were recomputed from sample `from` on, updated from
+ * the previous result's warnings instead of recounting the whole well.
+ *
+ * Each count = old count − count in oldFlags[from, end) + count in flags[from, end); the
+ * first index stays when it lies above `from`, otherwise it is the first in flags[from, end).
+ * Same warnings, order, counts, indices and depths as `flagWarnings(flags, tvdFt, methodName)`
+ * when flags[0, from) equals oldFlags[0, from) and `oldWarnings` is
+ * `flagWarnings(oldFlags, ·, methodName)`; falls back to the full count when `oldWarnings`
+ * holds a code that is not a flag warning.
+ *
+ * @param input.oldFlags the previous result's flags (one byte per old sample)
+ * @param input.oldWarnings the previous result's flag warnings
+ * @param input.flags the new flags (length ≥ from), equal to oldFlags above `from`
+ * @param input.from first recomputed sample index, 0 ≤ from ≤ oldFlags.length
+ * @param input.tvdFt TVD below RT of each new sample, ft (for the warnings' depths), or undefined
+ * @param input.methodName method name that starts each message, e.g. "Eaton"
+ * @returns one counted warning per problem flag kind present in `flags`
+ * @example splicedFlagWarnings({ oldFlags: Uint8Array.of(4, 0), oldWarnings: flagWarnings(Uint8Array.of(4, 0), undefined, "Eaton"),
+ *   flags: Uint8Array.of(4, 4, 4), from: 1, tvdFt: undefined, methodName: "Eaton" })[0].count // 3
+ */
+export function splicedFlagWarnings(input: {
+  oldFlags: Uint8Array;
+  oldWarnings: readonly Warning[];
+  flags: Uint8Array;
+  from: number;
+  tvdFt: ArrayLike<number> | undefined;
+  methodName: string;
+}): Warning[] {
+  const { oldFlags, oldWarnings, flags, from, tvdFt, methodName } = input;
+  const oldByCode = new Map<string, Warning>();
+  for (const w of oldWarnings) oldByCode.set(w.code, w);
+  if (!(from >= 0 && from <= oldFlags.length && from <= flags.length) || oldWarnings.some((w) => !WARNING_BITS.some((b) => b.code === w.code))) {
+    return flagWarnings(flags, tvdFt, methodName);
+  }
+  const gone = flagByteHistogram(oldFlags, from, oldFlags.length);
+  const added = flagByteHistogram(flags, from, flags.length);
+  const out: Warning[] = [];
+  for (const { bit, code, text } of WARNING_BITS) {
+    const old = oldByCode.get(code);
+    const oldCount = old?.count ?? 0;
+    const oldFirst = old?.index ?? -1;
+    const a = bitTally(added, bit);
+    const count = oldCount - bitTally(gone, bit).count + a.count;
+    if (count === 0) continue;
+    const first = oldFirst >= 0 && oldFirst < from ? oldFirst : a.first;
+    out.push(flagWarning(code, text, count, first, tvdFt, methodName));
   }
   return out;
 }
