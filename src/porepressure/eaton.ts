@@ -14,9 +14,13 @@
  */
 import { ShalepointError } from "../errors.js";
 import {
+  PP_FLAG_BELOW_HYDROSTATIC,
+  PP_FLAG_CLIPPED_AT_HYDROSTATIC,
+  PP_FLAG_CLIPPED_AT_OVERBURDEN,
   PP_FLAG_MISSING_INPUT,
+  PP_FLAG_OUTSIDE_CALIBRATION,
   checkLimitOptions,
-  finishPorePressure,
+  flagWarnings,
   requireLengths,
   type PorePressureLimitOptions,
   type PorePressureResult,
@@ -78,25 +82,56 @@ export function eatonPorePressure(input: EatonStressInputs & { ratio: ArrayLike<
   const n = ratio.length;
   requireLengths(n, { overburdenPsi, hydrostaticPsi, ratio });
   checkLimitOptions(n, input);
-  const raw = new Float64Array(n);
+  const pp = new Float64Array(n);
   const flags = new Uint8Array(n);
   // r^n for r > 0: r·r·r for the published sonic n = 3, exp(n·ln r) otherwise. Both are
   // several times faster than Math.pow and agree with it to a few units in the last place
   // (relative ≲ (1 + n·|ln r|)·2.2e-16, i.e. below 1e-11 psi on Pp for r in (0.2, 5)).
   const cube = exponent === 3;
+  // The limits of finishPorePressure (same tests, same order) are applied in the same pass.
+  const floor = input.floorAtHydrostatic === true;
+  const range = input.calibratedRangeTvdFt;
+  const tvd = input.tvdFt;
+  const checkRange = range !== undefined && tvd !== undefined;
+  const topFt = range?.topFt ?? NaN;
+  const baseFt = range?.baseFt ?? NaN;
   for (let i = 0; i < n; i++) {
     const sv = overburdenPsi[i];
     const ph = hydrostaticPsi[i];
     const r = ratio[i];
     if (!(Number.isFinite(sv) && Number.isFinite(ph) && Number.isFinite(r) && r > 0)) {
-      raw[i] = NaN;
+      pp[i] = NaN;
       flags[i] = PP_FLAG_MISSING_INPUT;
       continue;
     }
     const rn = cube ? r * r * r : Math.exp(exponent * Math.log(r));
-    raw[i] = sv - (sv - ph) * rn;
+    let p = sv - (sv - ph) * rn;
+    if (Number.isNaN(p)) {
+      // e.g. rn = ∞ with Sv = Ph: missing, as finishPorePressure flags a NaN raw value.
+      pp[i] = NaN;
+      flags[i] = PP_FLAG_MISSING_INPUT;
+      continue;
+    }
+    let f = 0;
+    if (p > sv) {
+      p = sv;
+      f = PP_FLAG_CLIPPED_AT_OVERBURDEN;
+    }
+    if (p < ph) {
+      f |= PP_FLAG_BELOW_HYDROSTATIC;
+      if (floor) {
+        p = ph;
+        f |= PP_FLAG_CLIPPED_AT_HYDROSTATIC;
+      }
+    }
+    if (checkRange) {
+      const z = tvd[i];
+      if (!(z >= topFt && z <= baseFt)) f |= PP_FLAG_OUTSIDE_CALIBRATION;
+    }
+    flags[i] = f;
+    pp[i] = p;
   }
-  return finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Eaton", true);
+  return { ppPsi: pp, flags, warnings: flagWarnings(flags, tvd, "Eaton") };
 }
 
 /**

@@ -85,6 +85,23 @@ export function evaluateCompactionTrend({ trend, bmlFt }: { trend: CompactionTre
     }
   }
   const form = trend.kind === "sonicExponential" ? 0 : trend.kind === "sonicLogLinear" ? 1 : 2;
+  if (form === 0) {
+    // Exponential sonic trend (the usual one) in a loop of its own: no per-sample test of
+    // the form; same operations, so same values.
+    for (let i = 0; i < n; i++) {
+      const z = bmlFt[i];
+      if (!(z >= 0)) {
+        out[i] = NaN;
+        continue;
+      }
+      let k = 0;
+      while (k + 1 < nSeg && z >= tops[k + 1]) k++;
+      const v = c0[k] + c1[k] * Math.exp(c2[k] * z);
+      if (!(Number.isFinite(v) && v > 0)) throwNonFinite(trend, k, z, v, i);
+      out[i] = v;
+    }
+    return out;
+  }
   for (let i = 0; i < n; i++) {
     const z = bmlFt[i];
     if (!(z >= 0)) {
@@ -93,14 +110,16 @@ export function evaluateCompactionTrend({ trend, bmlFt }: { trend: CompactionTre
     }
     let k = 0;
     while (k + 1 < nSeg && z >= tops[k + 1]) k++;
-    const v = form === 0 ? c0[k] + c1[k] * Math.exp(c2[k] * z) : form === 1 ? c0[k] * 10 ** (c1[k] * z) : c0[k] * Math.exp(c1[k] * z);
-    if (!(Number.isFinite(v) && v > 0)) {
-      throw new ShalepointError("E_TREND_NONFINITE", `the trend is not finite and positive at ${z} ft below mudline`, {
-        param: `segments[${k}].params`, value: v, row: i, unit: trend.kind === "resistivityLogLinear" ? "ohm.m" : "us/ft",
-        hint: "Check the trend parameters (a slope too large overflows).",
-      });
-    }
+    const v = form === 1 ? c0[k] * 10 ** (c1[k] * z) : c0[k] * Math.exp(c1[k] * z);
+    if (!(Number.isFinite(v) && v > 0)) throwNonFinite(trend, k, z, v, i);
     out[i] = v;
   }
   return out;
+}
+
+function throwNonFinite(trend: CompactionTrend, k: number, z: number, v: number, i: number): never {
+  throw new ShalepointError("E_TREND_NONFINITE", `the trend is not finite and positive at ${z} ft below mudline`, {
+    param: `segments[${k}].params`, value: v, row: i, unit: trend.kind === "resistivityLogLinear" ? "ohm.m" : "us/ft",
+    hint: "Check the trend parameters (a slope too large overflows).",
+  });
 }
