@@ -278,6 +278,78 @@ function fillEatonExponentialTrend(
   }
 }
 
+/**
+ * One stepped depth of the exponential-to-matrix trend (not an anchor depth) fused with the
+ * fracture pressure, the moments and the exceedance counts: each realisation is read and
+ * written once per depth. The arithmetic is that of fillEatonExponentialTrend (stepped branch)
+ * followed by fractureAndMoments, operation for operation and in the same realisation order,
+ * so every value (and every rounding) is the same; mom gets [s1, s2, shift, nBelow, nAbove].
+ */
+function stepEatonExponentialFused(
+  pp: Float64Array, fr: Float64Array, R: number, b: Float64Array, dtMatrix: number, n: Float64Array, f: Float64Array,
+  kF: Float64Array, lnObs: number, sv: number, ph: number, st: ExponentialTrendState, dzOff: number, mudPsi: number,
+  mom: Float64Array,
+): void {
+  const e = st.e;
+  const lt = st.lnTrend;
+  const step = st.step;
+  let shift = 0;
+  let s1 = 0;
+  let s2 = 0;
+  let nBelow = 0;
+  let nAbove = 0;
+  // Loops with a call spill every live value around it, so the trend step (no call in its
+  // usual path), the exp and the call-free pressure/fracture/moments pass are three loops.
+  if (dzOff === 0) {
+    for (let r = 0; r < R; r++) {
+      const e0 = e[r];
+      const e1 = e0 * step[r];
+      e[r] = e1;
+      const d = (e1 - e0) / (dtMatrix + e0);
+      lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
+        ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
+        : Math.log(dtMatrix + e1);
+    }
+  } else {
+    for (let r = 0; r < R; r++) {
+      const xr = b[r] * dzOff;
+      const e0 = e[r];
+      const e1 = e0 * (step[r] * (1 + xr * (1 + 0.5 * xr)));
+      e[r] = e1;
+      const d = (e1 - e0) / (dtMatrix + e0);
+      lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
+        ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
+        : Math.log(dtMatrix + e1);
+    }
+  }
+  // The only call (exp) in a loop of its own; pp first holds ratio^n.
+  for (let r = 0; r < R; r++) pp[r] = Math.exp(n[r] * (lt[r] - lnObs));
+  {
+    const svr = sv * f[0];
+    const q = svr - (svr - ph) * pp[0];
+    shift = q > svr ? svr : q;
+  }
+  for (let r = 0; r < R; r++) {
+    const svr = sv * f[r];
+    const q = svr - (svr - ph) * pp[r];
+    const p = q > svr ? svr : q;
+    pp[r] = p;
+    const eff = svr - p;
+    const x = p + kF[r] * (eff > 0 ? eff : 0);
+    fr[r] = x;
+    const dv = p - shift;
+    s1 += dv;
+    s2 += dv * dv;
+    if (p > mudPsi) nBelow++;
+    if (x < mudPsi) nAbove++;
+  }
+  mom[0] = s1;
+  mom[1] = s2;
+  mom[2] = shift;
+  mom[3] = nBelow;
+  mom[4] = nAbove;
+}
+
 /** Bowers: Pp = Sv_r − σ_r, virgin or (u given) unloading branch; V ≤ V0 gives σ = 0. */
 function fillBowers(
   out: Float64Array, R: number, v: number, v0: number, lnA: Float64Array, invB: Float64Array,
@@ -302,8 +374,8 @@ function fillBowers(
 
 /** Fracture pressure per realisation, shifted moment sums of Pp, and exceedance counts. */
 function fractureAndMoments(
-  pp: Float64Array, fr: Float64Array, R: number, f: Float64Array, k: Float64Array, sv: number, mudPsi: number,
-): { s1: number; s2: number; shift: number; nBelow: number; nAbove: number } {
+  pp: Float64Array, fr: Float64Array, R: number, f: Float64Array, k: Float64Array, sv: number, mudPsi: number, mom: Float64Array,
+): void {
   const shift = pp[0];
   let s1 = 0;
   let s2 = 0;
@@ -320,7 +392,11 @@ function fractureAndMoments(
     if (p > mudPsi) nBelow++;
     if (x < mudPsi) nAbove++;
   }
-  return { s1, s2, shift, nBelow, nAbove };
+  mom[0] = s1;
+  mom[1] = s2;
+  mom[2] = shift;
+  mom[3] = nBelow;
+  mom[4] = nAbove;
 }
 
 /** Per-realisation Eaton trend data of one segment. */
@@ -546,6 +622,7 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
   const probMudAboveFracture = mk();
   const ppBuf = new Float64Array(R);
   const frBuf = new Float64Array(R);
+  const mom = new Float64Array(5); // s1, s2, shift, nBelow, nAbove of the current depth
   const probs = [0.1, 0.5, 0.9];
   const ppTracker = createCarriedOrderQuantiles({ count: R, probabilities: probs });
   const frTracker = createCarriedOrderQuantiles({ count: R, probabilities: probs });
@@ -572,6 +649,8 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
     let ok = Number.isFinite(sv) && Number.isFinite(ph) && Number.isFinite(tvdFt[i]) && Number.isFinite(obs) && obs > 0;
     if (ok && isEaton) ok = z >= 0 && Number.isFinite(z);
     if (ok) {
+      const mudPsi = mw === undefined ? NaN : mw[i] * tvdFt[i];
+      let fused = false;
       if (isEaton) {
         let k = 0;
         while (k + 1 < segTops.length && z >= segTops[k + 1]) k++;
@@ -593,7 +672,11 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
               dzOff = 0;
             }
           }
-          fillEatonExponentialTrend(ppBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState, exact, dzOff);
+          if (exact) fillEatonExponentialTrend(ppBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState, true, 0);
+          else {
+            stepEatonExponentialFused(ppBuf, frBuf, R, seg.b, seg.dtMatrix, exponent, factor, kFrac, Math.log(obs), sv, ph, expState, dzOff, mudPsi, mom);
+            fused = true;
+          }
           trendAt = i;
           trendSeg = k;
           trendZ = z;
@@ -604,14 +687,14 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
         const unload = hasUnloading && tvdFt[i] >= unloadOnsetFt && v < vmax;
         fillBowers(ppBuf, R, v, v0, lnA, invB, unload ? uArr : null, lnSigmaMax, factor, sv);
       }
-      // Fracture pressure, moments (shifted sums about the first value) and exceedance counts.
-      const mudPsi = mw === undefined ? NaN : mw[i] * tvdFt[i];
-      const m = fractureAndMoments(ppBuf, frBuf, R, factor, kFrac, sv, mudPsi);
-      const s1 = m.s1;
-      const s2 = m.s2;
-      const shift = m.shift;
-      const nBelow = m.nBelow;
-      const nAbove = m.nAbove;
+      // Fracture pressure, moments (shifted sums about the first value) and exceedance counts
+      // (already taken by the fused stepped-trend kernel when it ran).
+      if (!fused) fractureAndMoments(ppBuf, frBuf, R, factor, kFrac, sv, mudPsi, mom);
+      const s1 = mom[0];
+      const s2 = mom[1];
+      const shift = mom[2];
+      const nBelow = mom[3];
+      const nAbove = mom[4];
       if (Number.isFinite(s2)) {
         const mean = s1 / R;
         ppMeanPsi[o] = shift + mean;
