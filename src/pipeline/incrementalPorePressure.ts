@@ -610,8 +610,16 @@ function updateOverburden(
     gradientPsiPerFt[i] = tvdFt[i] > 0 ? svPsi[i] / tvdFt[i] : NaN;
     emwPpg[i] = gradientPsiPerFt[i] / PSI_PER_FT_PER_PPG;
   }
+  // Runs that end, with the sample after them, above `from` are unchanged: copied, and the
+  // scan restarts at the first run that reaches `from` − 1 (same runs as a scan from 0).
   const ranges: OverburdenSourceRange[] = [];
-  for (let i = 0; i < n; ) {
+  let restart = 0;
+  for (const rg of old.ranges) {
+    if (!(rg.toIndex + 1 < from && rg.fromIndex === restart)) break;
+    ranges.push({ ...rg });
+    restart = rg.toIndex + 1;
+  }
+  for (let i = restart; i < n; ) {
     let j = i;
     while (j + 1 < n && source[j + 1] === source[i]) j++;
     ranges.push({ source: OVERBURDEN_SOURCE_NAMES[source[i]], fromIndex: i, toIndex: j, fromTvdFt: tvdFt[i], toTvdFt: tvdFt[j], count: j - i + 1 });
