@@ -3,11 +3,13 @@
  *
  * This folder is a Node edge (it uses node:worker_threads and node:os); the pure kernel stays
  * in src/uncertainty, which keeps no I/O and no Node APIs. The well's depth index is cut into
- * consecutive parts that start on multiples of 64 (MONTE_CARLO_DEPTH_BLOCK); the calling
- * thread runs the first part while worker threads run the others, each with the same input
- * and seed (so the same draws), and the parts are joined. Because each part restarts the
- * depth-stepped trend state on a block boundary and the quantiles are exact, the result is
- * the single-thread result bit for bit.
+ * consecutive chunks (about 2048 depths) that start on multiples of 64
+ * (MONTE_CARLO_DEPTH_BLOCK); the calling thread and the worker threads take chunks from one
+ * shared counter (Atomics on a SharedArrayBuffer) until none is left, so a thread slowed by
+ * other load on the machine takes fewer chunks instead of holding up the join. Every chunk
+ * uses the same input and seed (so the same draws), and the chunks are joined in depth
+ * order. Because each chunk restarts the depth-stepped trend state on a block boundary and
+ * the quantiles are exact, the result is the single-thread result bit for bit.
  *
  * Results are estimates for trained engineers: calibrate them to measured data and have them
  * reviewed; local regulations and licensed practice govern.
@@ -35,14 +37,15 @@ export interface ParallelUncertaintyOptions {
   workerUrl?: URL;
 }
 
-/** Split [0, n) into `parts` ranges whose starts are multiples of the block size. */
-function blockAlignedStarts(n: number, parts: number): number[] {
-  const starts = [0];
-  for (let k = 1; k < parts; k++) {
-    const s = Math.round((k * n) / parts / MONTE_CARLO_DEPTH_BLOCK) * MONTE_CARLO_DEPTH_BLOCK;
-    if (s > starts[starts.length - 1] && s < n) starts.push(s);
-  }
-  return starts;
+/** Depths per shared chunk (a multiple of 64): small enough to even out the threads' finish. */
+const CHUNK_DEPTHS = 32 * MONTE_CARLO_DEPTH_BLOCK;
+
+/** Chunk bounds of [0, n): starts on multiples of the block size, then n. */
+function chunkBounds(n: number): number[] {
+  const bounds: number[] = [];
+  for (let s = 0; s < n; s += CHUNK_DEPTHS) bounds.push(s);
+  bounds.push(n);
+  return bounds;
 }
 
 /**
@@ -88,18 +91,19 @@ export async function closeUncertaintyWorkers(): Promise<void> {
   await Promise.all(all.map((w) => w.terminate()));
 }
 
-type WorkerReply = { id: number; ok: boolean; result?: PressureUncertaintyResult; code?: string; message?: string; details?: ErrorDetails };
+type ChunkResult = { index: number; result: PressureUncertaintyResult };
+type WorkerReply = { id: number; ok: boolean; chunks?: ChunkResult[]; code?: string; message?: string; details?: ErrorDetails };
 
-function runInWorker(url: URL, msg: { input: PressureUncertaintyInput; startIndex: number; endIndex: number }): { promise: Promise<PressureUncertaintyResult>; stop: () => void } {
+function runInWorker(url: URL, msg: { input: PressureUncertaintyInput; bounds: number[]; next: Int32Array }): { promise: Promise<ChunkResult[]>; stop: () => void } {
   const worker = takeWorker(url);
   const id = nextJobId++;
   let cleanup = (): void => undefined;
-  const promise = new Promise<PressureUncertaintyResult>((resolve, reject) => {
+  const promise = new Promise<ChunkResult[]>((resolve, reject) => {
     const onMessage = (m: WorkerReply): void => {
       if (m.id !== id) return;
       cleanup();
       releaseWorker(url, worker);
-      if (m.ok && m.result !== undefined) resolve(m.result);
+      if (m.ok && m.chunks !== undefined) resolve(m.chunks);
       else reject(new ShalepointError(m.code ?? "E_INTERNAL", m.message ?? "worker failed", m.details ?? {}));
     };
     const onError = (e: Error): void => {
@@ -160,14 +164,22 @@ export async function simulatePressureUncertaintyParallel(
   const n = input.tvdFt.length;
   const parts = Math.min(threads, Math.floor(n / MIN_DEPTHS_PER_THREAD));
   if (parts <= 1) return simulatePressureUncertainty(input);
-  const starts = blockAlignedStarts(n, parts);
-  const ends = [...starts.slice(1), n];
+  const bounds = chunkBounds(n);
+  const last = bounds.length - 1;
+  const next = new Int32Array(new SharedArrayBuffer(4));
   const url = options.workerUrl ?? new URL("./uncertaintyPartWorker.js", import.meta.url);
-  const jobs = starts.slice(1).map((s, k) => runInWorker(url, { input, startIndex: s, endIndex: ends[k + 1] }));
+  const jobs = Array.from({ length: parts - 1 }, () => runInWorker(url, { input, bounds, next }));
   try {
-    const first = simulatePressureUncertaintyPart({ input, startIndex: 0, endIndex: ends[0] });
-    const rest = await Promise.all(jobs.map((j) => j.promise));
-    return joinPressureUncertaintyParts({ parts: [first, ...rest] });
+    const byIndex: (PressureUncertaintyResult | undefined)[] = new Array(last);
+    for (let k = Atomics.add(next, 0, 1); k < last; k = Atomics.add(next, 0, 1)) {
+      byIndex[k] = simulatePressureUncertaintyPart({ input, startIndex: bounds[k], endIndex: bounds[k + 1] });
+    }
+    for (const chunks of await Promise.all(jobs.map((j) => j.promise))) for (const c of chunks) byIndex[c.index] = c.result;
+    const ordered = byIndex.map((r, k) => {
+      if (r === undefined) throw new ShalepointError("E_INTERNAL", `depth chunk ${k} was not computed`, { param: "chunk", value: k });
+      return r;
+    });
+    return joinPressureUncertaintyParts({ parts: ordered });
   } catch (e) {
     jobs.forEach((j) => j.stop());
     throw e;

@@ -1,8 +1,10 @@
 /**
  * Worker-thread entry for {@link simulatePressureUncertaintyParallel}: for each message
- * `{ id, input, startIndex, endIndex }` runs simulatePressureUncertaintyPart (the pure core
- * kernel) and posts back `{ id, ok: true, result }` (arrays transferred, not copied) or
- * `{ id, ok: false, code, message, details }`. The thread stays up for the next message.
+ * `{ id, input, bounds, next }` takes depth chunks from the shared counter `next` (the same
+ * counter the calling thread takes from), runs simulatePressureUncertaintyPart (the pure core
+ * kernel) on each, and posts back `{ id, ok: true, chunks: [{ index, result }] }` (arrays
+ * transferred, not copied) or `{ id, ok: false, code, message, details }`. The thread stays
+ * up for the next message.
  *
  * Node edge module (node:worker_threads); the computation itself stays in src/uncertainty.
  */
@@ -18,11 +20,30 @@ function transferList(result: PressureUncertaintyResult): ArrayBuffer[] {
   return [...seen];
 }
 
-parentPort?.on("message", (msg: Parameters<typeof simulatePressureUncertaintyPart>[0] & { id: number }) => {
+/** A job: the whole input, the chunk bounds and the shared counter of the next chunk to take. */
+interface ChunkJob {
+  id: number;
+  input: Parameters<typeof simulatePressureUncertaintyPart>[0]["input"];
+  /** Chunk k covers depth indices [bounds[k], bounds[k + 1]); every start a multiple of 64. */
+  bounds: number[];
+  /** Int32Array on a SharedArrayBuffer; slot 0 = next chunk index, taken with Atomics.add. */
+  next: Int32Array;
+}
+
+parentPort?.on("message", (msg: ChunkJob) => {
   const id = msg.id;
   try {
-    const result = simulatePressureUncertaintyPart(msg);
-    parentPort?.postMessage({ id, ok: true, result }, transferList(result));
+    // Take chunks until none is left; the calling thread takes from the same counter, so a
+    // thread slowed by other load simply takes fewer chunks.
+    const chunks: { index: number; result: PressureUncertaintyResult }[] = [];
+    const buffers: ArrayBuffer[] = [];
+    const last = msg.bounds.length - 1;
+    for (let k = Atomics.add(msg.next, 0, 1); k < last; k = Atomics.add(msg.next, 0, 1)) {
+      const result = simulatePressureUncertaintyPart({ input: msg.input, startIndex: msg.bounds[k], endIndex: msg.bounds[k + 1] });
+      chunks.push({ index: k, result });
+      buffers.push(...transferList(result));
+    }
+    parentPort?.postMessage({ id, ok: true, chunks }, buffers);
   } catch (e) {
     const err = e instanceof ShalepointError ? e : new ShalepointError("E_INTERNAL", String((e as Error)?.message ?? e));
     parentPort?.postMessage({ id, ok: false, code: err.code, message: err.message, details: JSON.parse(JSON.stringify(err.details)) });
