@@ -34,7 +34,7 @@ import { despikeLog } from "../logs/despikeLog.js";
 import { flagBadHole } from "../logs/flagBadHole.js";
 import { pickShalePoints, type ShalePick, type ShalePoints } from "../logs/pickShalePoints.js";
 import { interpolateShaleLine } from "../logs/interpolateShaleLine.js";
-import { OverburdenSource, OVERBURDEN_SOURCE_NAMES, type OverburdenResult, type OverburdenSourceRange } from "../stress/overburden.js";
+import { fillPendingDensity, OverburdenSource, OVERBURDEN_SOURCE_NAMES, type OverburdenResult, type OverburdenSourceRange } from "../stress/overburden.js";
 import { gardnerDensityFromSlowness } from "../stress/gardnerDensity.js";
 import { hydrostaticPressure } from "../stress/hydrostatic.js";
 import { PSI_PER_FT_PER_GCC, PSI_PER_FT_PER_PPG } from "../units/index.js";
@@ -567,29 +567,7 @@ function updateOverburden(
       source[i] = PENDING;
     }
   }
-  let prev = from - 1;
-  for (let i = from; i < n; i++) {
-    if (source[i] !== PENDING) {
-      prev = i;
-      continue;
-    }
-    let next = i + 1;
-    while (next < n && source[next] === PENDING) next++;
-    for (let k = i; k < next; k++) {
-      if (next < n && tvdFt[next] > tvdFt[prev]) {
-        const t = (tvdFt[k] - tvdFt[prev]) / (tvdFt[next] - tvdFt[prev]);
-        rho[k] = rho[prev] + t * (rho[next] - rho[prev]);
-        source[k] = OverburdenSource.interpolated;
-      } else if (next < n) {
-        rho[k] = rho[prev];
-        source[k] = OverburdenSource.interpolated;
-      } else {
-        rho[k] = rho[prev];
-        source[k] = OverburdenSource.extendedLastValue;
-      }
-    }
-    i = next - 1;
-  }
+  fillPendingDensity({ tvdFt, rhoGcc: rho, source, lastKnownIndex: from - 1, pending: PENDING });
   const sumPsi = grow(state.overburdenRun.sumPsi, n);
   const compPsi = grow(state.overburdenRun.compPsi, n);
   const svPsi = grow(old.svPsi, n);

@@ -266,29 +266,7 @@ export function integrateOverburden(input: OverburdenInput): OverburdenResult {
     svPsi[i] = svMudlinePsi + powerLawAverageDensityPpg(dBml) * dBml * PSI_PER_FT_PER_PPG;
   }
   // interpolate / extend the pending samples below the anchor
-  let prev = iAnchor;
-  for (let i = iAnchor + 1; i < n; i++) {
-    if (source[i] !== PENDING) {
-      prev = i;
-      continue;
-    }
-    let next = i + 1;
-    while (next < n && source[next] === PENDING) next++;
-    for (let k = i; k < next; k++) {
-      if (next < n && tvdFt[next] > tvdFt[prev]) {
-        const t = (tvdFt[k] - tvdFt[prev]) / (tvdFt[next] - tvdFt[prev]);
-        rho[k] = rho[prev] + t * (rho[next] - rho[prev]);
-        source[k] = OverburdenSource.interpolated;
-      } else if (next < n) {
-        rho[k] = rho[prev];
-        source[k] = OverburdenSource.interpolated;
-      } else {
-        rho[k] = rho[prev];
-        source[k] = OverburdenSource.extendedLastValue;
-      }
-    }
-    i = next - 1;
-  }
+  fillPendingDensity({ tvdFt, rhoGcc: rho, source, lastKnownIndex: iAnchor, pending: PENDING });
 
   // 4. trapezoid integration from the anchor, Neumaier-compensated running sum
   if (iAnchor < n) {
@@ -338,4 +316,51 @@ export function integrateOverburden(input: OverburdenInput): OverburdenResult {
   }
 
   return { svPsi, gradientPsiPerFt, emwPpg, densityUsedGcc: rho, source, ranges, warnings };
+}
+
+/**
+ * Fill density samples still marked `pending` below a known sample: linear interpolation in
+ * depth between the known samples on either side (source `interpolated`), or the last known
+ * value held below the last one (source `extendedLastValue`). Works in place on `rhoGcc`
+ * and `source`, from `lastKnownIndex + 1` to the end. Shared by {@link integrateOverburden}
+ * and the while-drilling update, which continues the same fill from its restart sample.
+ *
+ * @param args.tvdFt TVD below RT, ft, non-decreasing
+ * @param args.rhoGcc density per sample, g/cc (written where pending)
+ * @param args.source source code per sample (written where pending)
+ * @param args.lastKnownIndex index of a sample with a known density; filling starts below it
+ * @param args.pending the source code that marks a pending sample
+ */
+export function fillPendingDensity(args: {
+  tvdFt: ArrayLike<number>;
+  rhoGcc: Float64Array;
+  source: Uint8Array;
+  lastKnownIndex: number;
+  pending: number;
+}): void {
+  const { tvdFt, rhoGcc: rho, source, pending } = args;
+  const n = rho.length;
+  let prev = args.lastKnownIndex;
+  for (let i = prev + 1; i < n; i++) {
+    if (source[i] !== pending) {
+      prev = i;
+      continue;
+    }
+    let next = i + 1;
+    while (next < n && source[next] === pending) next++;
+    for (let k = i; k < next; k++) {
+      if (next < n && tvdFt[next] > tvdFt[prev]) {
+        const t = (tvdFt[k] - tvdFt[prev]) / (tvdFt[next] - tvdFt[prev]);
+        rho[k] = rho[prev] + t * (rho[next] - rho[prev]);
+        source[k] = OverburdenSource.interpolated;
+      } else if (next < n) {
+        rho[k] = rho[prev];
+        source[k] = OverburdenSource.interpolated;
+      } else {
+        rho[k] = rho[prev];
+        source[k] = OverburdenSource.extendedLastValue;
+      }
+    }
+    i = next - 1;
+  }
 }
