@@ -144,6 +144,23 @@ function concat(a: ArrayLike<number>, b: ArrayLike<number>): Float64Array {
   return out;
 }
 
+/**
+ * Velocity at the onset of unloading, as {@link velocityAtDepth} gives it on the whole
+ * velocity log, but converting only the two samples that bracket the depth (the same two
+ * samples and formula, so the same value); outside the index it defers to the full call so
+ * the error is the same.
+ */
+function velocityAtOnset(tvdFt: Float64Array, dtUsPerFt: Float64Array, depthFt: number): number {
+  const n = tvdFt.length;
+  if (!(n > 1 && depthFt >= tvdFt[0] && depthFt <= tvdFt[n - 1])) {
+    return velocityAtDepth(tvdFt, velocityFromSlownessLog(dtUsPerFt), depthFt);
+  }
+  let j = 0;
+  while (j < n - 1 && tvdFt[j] < depthFt) j++;
+  const a = Math.max(0, j - 1);
+  return velocityAtDepth(tvdFt.subarray(a, j + 1), velocityFromSlownessLog(dtUsPerFt.subarray(a, j + 1)), depthFt);
+}
+
 function grow(old: Float64Array, n: number): Float64Array {
   const out = new Float64Array(n);
   out.set(old.subarray(0, Math.min(old.length, n)));
@@ -465,7 +482,7 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     let unloading = options.bowers.unloading;
     // Vmax is read once on the whole velocity log (as the full run does), then passed explicitly.
     if (unloading && unloading.vmaxFtPerS === undefined) {
-      unloading = { ...unloading, vmaxFtPerS: velocityAtDepth(tvdFt, velocityFromSlownessLog(shaleLine.dtUsPerFt), unloading.onsetTvdFt) };
+      unloading = { ...unloading, vmaxFtPerS: velocityAtOnset(tvdFt, shaleLine.dtUsPerFt, unloading.onsetTvdFt) };
     }
     const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
     const velocity = velocityFromSlownessLog(sub(shaleLine.dtUsPerFt, f));
