@@ -9,7 +9,7 @@
  */
 import { describe, expect, it, beforeAll } from "vitest";
 import { spawnSync } from "node:child_process";
-import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 
@@ -96,6 +96,30 @@ describe("notebooks/*.ipynb", () => {
           const full = join(notebookDir, "work", file);
           expect(existsSync(full), `${name} promised notebooks/work/${file}`).toBe(true);
           expect(statSync(full).mtimeMs).toBeGreaterThanOrEqual(startedMs - 1000);
+        }
+        if (name.startsWith("01-")) {
+          // A picture of the first figure of the executed notebook (its HTML export, drawn by
+          // plotly) for a reviewer, written to test-output/ (git-ignored) by headless Chromium.
+          // The PNG signature is read back (W3C PNG Specification §5.2).
+          const html = join(notebookDir, "executed", name.replace(/\.ipynb$/, ".html"));
+          const png = join(root, "test-output", "notebook-01-figure.png");
+          mkdirSync(dirname(png), { recursive: true });
+          const { chromium } = await import("playwright-core");
+          const browser = await chromium.launch({
+            executablePath: "/usr/bin/chromium",
+            args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+          });
+          try {
+            const page = await browser.newPage({ viewport: { width: 1200, height: 1400 } });
+            await page.goto(pathToFileURL(html).href);
+            const figure = page.locator(".js-plotly-plot").first();
+            await figure.waitFor({ state: "visible", timeout: 60_000 });
+            await figure.locator(".main-svg").first().waitFor({ timeout: 60_000 });
+            await figure.screenshot({ path: png });
+          } finally {
+            await browser.close();
+          }
+          expect(readFileSync(png).subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]));
         }
         if (name.startsWith("03-")) {
           // Own case: the trend file written by 03's refit cell is a shalepoint-trend file whose
