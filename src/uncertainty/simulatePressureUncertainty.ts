@@ -225,51 +225,21 @@ interface ExponentialTrendState {
 }
 
 /**
- * Eaton with the exponential-to-matrix sonic trend: ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt.
- * exact: E and ln(Δtm + E) evaluated directly. Otherwise one step ΔZ on from the previous
- * depth: E ← E·e^(b·ΔZ₀)·e^(b·(ΔZ − ΔZ₀)), where the step factors e^(b·ΔZ₀) are shared
- * while the step repeats and the small remainder e^x, |x| ≤ 1e-6, is 1 + x + x²/2 (error
- * below x³/6 < 2e-19); and ln(Δtm + E) ← ln(Δtm + E) + ln(1 + δ), δ = ΔE/(Δtm + E_prev), by
- * its series when |δ| ≤ 2e-3, else by a direct log.
+ * Eaton with the exponential-to-matrix sonic trend at an anchor depth (the first of a
+ * 64-depth block, or after a gap or segment change): ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt
+ * with E and ln(Δtm + E) evaluated directly; they seed the stepped depths that follow
+ * ({@link stepEatonExponentialFused}).
  */
 function fillEatonExponentialTrend(
   out: Float64Array, R: number, a: Float64Array, b: Float64Array, dtMatrix: number, n: Float64Array, f: Float64Array,
-  z: number, lnObs: number, sv: number, ph: number, st: ExponentialTrendState, exact: boolean, dzOff: number,
+  z: number, lnObs: number, sv: number, ph: number, st: ExponentialTrendState,
 ): void {
   const e = st.e;
   const lt = st.lnTrend;
-  if (exact) {
-    for (let r = 0; r < R; r++) {
-      const er = Math.exp(a[r] + b[r] * z);
-      e[r] = er;
-      lt[r] = Math.log(dtMatrix + er);
-    }
-  } else {
-    const step = st.step;
-    // Light loops without calls in the usual path: V8 keeps them in registers better than
-    // one loop with two calls. The ΔZ ≠ ΔZ₀ variant folds e^(b·(ΔZ − ΔZ₀)) into the step.
-    if (dzOff === 0) {
-      for (let r = 0; r < R; r++) {
-        const e0 = e[r];
-        const e1 = e0 * step[r];
-        e[r] = e1;
-        const d = (e1 - e0) / (dtMatrix + e0);
-        lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
-          ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
-          : Math.log(dtMatrix + e1);
-      }
-    } else {
-      for (let r = 0; r < R; r++) {
-        const x = b[r] * dzOff;
-        const e0 = e[r];
-        const e1 = e0 * (step[r] * (1 + x * (1 + 0.5 * x)));
-        e[r] = e1;
-        const d = (e1 - e0) / (dtMatrix + e0);
-        lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
-          ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
-          : Math.log(dtMatrix + e1);
-      }
-    }
+  for (let r = 0; r < R; r++) {
+    const er = Math.exp(a[r] + b[r] * z);
+    e[r] = er;
+    lt[r] = Math.log(dtMatrix + er);
   }
   for (let r = 0; r < R; r++) {
     const svr = sv * f[r];
@@ -281,9 +251,12 @@ function fillEatonExponentialTrend(
 /**
  * One stepped depth of the exponential-to-matrix trend (not an anchor depth) fused with the
  * fracture pressure, the moments and the exceedance counts: each realisation is read and
- * written once per depth. The arithmetic is that of fillEatonExponentialTrend (stepped branch)
- * followed by fractureAndMoments, operation for operation and in the same realisation order,
- * so every value (and every rounding) is the same; mom gets [s1, s2, shift, nBelow, nAbove].
+ * written once per depth; mom gets [s1, s2, shift, nBelow, nAbove]. The step: from the
+ * previous depth E ← E·e^(b·ΔZ₀)·e^(b·(ΔZ − ΔZ₀)), where the step factors e^(b·ΔZ₀) are
+ * shared while the step repeats and the small remainder e^x, |x| ≤ 1e-6, is 1 + x + x²/2
+ * (error below x³/6 < 2e-19); and ln(Δtm + E) ← ln(Δtm + E) + ln(1 + δ), δ = ΔE/(Δtm + E_prev),
+ * by its series when |δ| ≤ 2e-3, else by a direct log. The fracture and moments arithmetic is
+ * that of fractureAndMoments, operation for operation and in the same realisation order.
  */
 function stepEatonExponentialFused(
   pp: Float64Array, fr: Float64Array, R: number, b: Float64Array, dtMatrix: number, n: Float64Array, f: Float64Array,
@@ -672,7 +645,7 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
               dzOff = 0;
             }
           }
-          if (exact) fillEatonExponentialTrend(ppBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState, true, 0);
+          if (exact) fillEatonExponentialTrend(ppBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState);
           else {
             stepEatonExponentialFused(ppBuf, frBuf, R, seg.b, seg.dtMatrix, exponent, factor, kFrac, Math.log(obs), sv, ph, expState, dzOff, mudPsi, mom);
             fused = true;
