@@ -19,7 +19,7 @@
  *
  * Imports: ../errors.js only.
  */
-import { ShalepointError } from "../errors.js";
+import { checkQuantileRequest } from "./quantilesType7.js";
 
 /** Quantile reader returned by {@link createCarriedOrderQuantiles}. */
 export interface CarriedOrderQuantiles {
@@ -51,18 +51,7 @@ export interface CarriedOrderQuantiles {
  * @see Hyndman & Fan 1996, The American Statistician 50(4):361–365, definition 7; Knuth 1998, TAOCP vol. 3 §5.2.1
  */
 export function createCarriedOrderQuantiles(input: { count: number; probabilities: ArrayLike<number> }): CarriedOrderQuantiles {
-  const n = input.count;
-  const probs = Array.from(input.probabilities);
-  if (!(Number.isSafeInteger(n) && n >= 1)) {
-    throw new ShalepointError("E_RANGE", "sample size must be an integer ≥ 1", { param: "count", value: n, allowed: ">= 1" });
-  }
-  probs.forEach((p, q) => {
-    if (!(p >= 0 && p <= 1) || (q > 0 && p < probs[q - 1])) {
-      throw new ShalepointError("E_RANGE", "probabilities must lie in [0, 1] in ascending order", {
-        param: `probabilities[${q}]`, value: p, allowed: "[0, 1], ascending",
-      });
-    }
-  });
+  const { n, probs } = checkQuantileRequest(input);
   const m = probs.length;
   const jq = new Int32Array(m);
   const gq = new Float64Array(m);

@@ -211,6 +211,28 @@ function floydRivestSelectIndex(idx: Int32Array, key: Float64Array, k: number, l
 }
 
 /**
+ * Check a request for quantiles of a fixed sample size (shared by the quantile trackers).
+ * @returns the sample size and the probabilities as an array
+ * @throws ShalepointError E_RANGE for a count that is not an integer ≥ 1, or probabilities
+ *   not ascending in [0, 1]
+ */
+export function checkQuantileRequest(input: { count: number; probabilities: ArrayLike<number> }): { n: number; probs: number[] } {
+  const n = input.count;
+  const probs = Array.from(input.probabilities);
+  if (!(Number.isSafeInteger(n) && n >= 1)) {
+    throw new ShalepointError("E_RANGE", "sample size must be an integer ≥ 1", { param: "count", value: n, allowed: ">= 1" });
+  }
+  probs.forEach((p, q) => {
+    if (!(p >= 0 && p <= 1) || (q > 0 && p < probs[q - 1])) {
+      throw new ShalepointError("E_RANGE", "probabilities must lie in [0, 1] in ascending order", {
+        param: `probabilities[${q}]`, value: p, allowed: "[0, 1], ascending",
+      });
+    }
+  });
+  return { n, probs };
+}
+
+/**
  * Type-7 quantiles of a sequence of related samples (one per depth), exact, usually in one
  * pass per sample.
  *
@@ -236,18 +258,7 @@ function floydRivestSelectIndex(idx: Int32Array, key: Float64Array, k: number, l
 export function createQuantileTracker(input: { count: number; probabilities: ArrayLike<number> }): {
   quantiles(values: Float64Array, out: Float64Array, outOffset: number): void;
 } {
-  const n = input.count;
-  const probs = Array.from(input.probabilities);
-  if (!(Number.isSafeInteger(n) && n >= 1)) {
-    throw new ShalepointError("E_RANGE", "sample size must be an integer ≥ 1", { param: "count", value: n, allowed: ">= 1" });
-  }
-  probs.forEach((p, q) => {
-    if (!(p >= 0 && p <= 1) || (q > 0 && p < probs[q - 1])) {
-      throw new ShalepointError("E_RANGE", "probabilities must lie in [0, 1] in ascending order", {
-        param: `probabilities[${q}]`, value: p, allowed: "[0, 1], ascending",
-      });
-    }
-  });
+  const { n, probs } = checkQuantileRequest(input);
   const m = probs.length;
   const jq = probs.map((p) => Math.floor((n - 1) * p));
   const gq = probs.map((p, q) => (n - 1) * p - jq[q]);
