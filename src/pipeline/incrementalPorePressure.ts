@@ -461,21 +461,19 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
 
   const methods: PorePressurePrediction["methods"] = {};
   const sub = (a: Float64Array, f: number): Float64Array => a.subarray(f);
-  if (options.eatonSonic && sonic.outcome && shaleLine.dtUsPerFt) {
-    const f = Math.min(from, sonic.from);
-    const exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
-    const ratio = eatonRatio({ log: "sonic", observed: sub(shaleLine.dtUsPerFt, f), trend: sub(sonic.outcome.values, f) });
+  // Eaton from the first sample its shale line or trend changed, spliced after the old result.
+  const eatonFrom = (log: "sonic" | "resistivity", line: Float64Array, trend: Float64Array, f: number, oldResult: PorePressureResult | undefined, exponent: number) => {
+    const ratio = eatonRatio({ log, observed: sub(line, f), trend: sub(trend, f) });
     const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
-    const r = spliceResult(old.methods.eatonSonic, tail, f, n, tvdFt, "Eaton");
-    methods.eatonSonic = { ...r, exponent };
+    return { ...spliceResult(oldResult, tail, f, n, tvdFt, "Eaton"), exponent };
+  };
+  if (options.eatonSonic && sonic.outcome && shaleLine.dtUsPerFt) {
+    const exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
+    methods.eatonSonic = eatonFrom("sonic", shaleLine.dtUsPerFt, sonic.outcome.values, Math.min(from, sonic.from), old.methods.eatonSonic, exponent);
   }
   if (options.eatonResistivity && resistivity.outcome && shaleLine.resOhmM) {
-    const f = Math.min(from, resistivity.from);
     const exponent = options.eatonResistivity.exponent ?? EATON_RESISTIVITY_EXPONENT;
-    const ratio = eatonRatio({ log: "resistivity", observed: sub(shaleLine.resOhmM, f), trend: sub(resistivity.outcome.values, f) });
-    const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
-    const r = spliceResult(old.methods.eatonResistivity, tail, f, n, tvdFt, "Eaton");
-    methods.eatonResistivity = { ...r, exponent };
+    methods.eatonResistivity = eatonFrom("resistivity", shaleLine.resOhmM, resistivity.outcome.values, Math.min(from, resistivity.from), old.methods.eatonResistivity, exponent);
   }
   if (options.bowers && shaleLine.dtUsPerFt) {
     const { a, b, v0FtPerS } = options.bowers;
