@@ -268,25 +268,29 @@ export function predictPorePressure(well: Well, options: PorePressurePredictionO
   const calibration: PorePressurePrediction["calibration"] = {};
   const observations = options.calibration?.observations ?? [];
 
+  // Eaton on one log: the ratio of shale line to trend, the exponent given or fitted to the
+  // calibration pressures, then the pore pressure.
+  const eaton = (log: "sonic" | "resistivity", observed: Float64Array, trend: Float64Array, givenExponent: number) => {
+    const ratio = eatonRatio({ log, observed, trend });
+    let exponent = givenExponent;
+    let fitted: EatonCalibration | undefined;
+    if (options.calibration?.fitEatonExponents && observations.length > 0) {
+      fitted = calibrateEatonExponent({ ...stress, ratio, observations });
+      exponent = fitted.exponent;
+    }
+    return { result: { ...eatonPorePressure({ ...stress, ratio, exponent }), exponent }, fitted };
+  };
   if (options.eatonSonic) {
     if (!sonicTrend || !shaleLine.dtUsPerFt) throw missingCurve("eatonSonic", "slowness and a sonic trend");
-    const ratio = eatonRatio({ log: "sonic", observed: shaleLine.dtUsPerFt, trend: sonicTrend.values });
-    let exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
-    if (options.calibration?.fitEatonExponents && observations.length > 0) {
-      calibration.eatonSonic = calibrateEatonExponent({ ...stress, ratio, observations });
-      exponent = calibration.eatonSonic.exponent;
-    }
-    methods.eatonSonic = { ...eatonPorePressure({ ...stress, ratio, exponent }), exponent };
+    const r = eaton("sonic", shaleLine.dtUsPerFt, sonicTrend.values, options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT);
+    methods.eatonSonic = r.result;
+    if (r.fitted) calibration.eatonSonic = r.fitted;
   }
   if (options.eatonResistivity) {
     if (!resistivityTrend || !shaleLine.resOhmM) throw missingCurve("eatonResistivity", "resistivity and a resistivity trend");
-    const ratio = eatonRatio({ log: "resistivity", observed: shaleLine.resOhmM, trend: resistivityTrend.values });
-    let exponent = options.eatonResistivity.exponent ?? EATON_RESISTIVITY_EXPONENT;
-    if (options.calibration?.fitEatonExponents && observations.length > 0) {
-      calibration.eatonResistivity = calibrateEatonExponent({ ...stress, ratio, observations });
-      exponent = calibration.eatonResistivity.exponent;
-    }
-    methods.eatonResistivity = { ...eatonPorePressure({ ...stress, ratio, exponent }), exponent };
+    const r = eaton("resistivity", shaleLine.resOhmM, resistivityTrend.values, options.eatonResistivity.exponent ?? EATON_RESISTIVITY_EXPONENT);
+    methods.eatonResistivity = r.result;
+    if (r.fitted) calibration.eatonResistivity = r.fitted;
   }
   if (options.bowers) {
     if (!shaleLine.dtUsPerFt) throw missingCurve("bowers", "slowness");
