@@ -140,6 +140,10 @@ const FUNCTION_TREND_CHECK_POINTS = 65;
  * @param input.trend {@link EquivalentDepthTrend}
  * @param input.searchTopTvdFt shallowest depth Ze may take, ft (default: first sample with finite Sv and Ph)
  * @param input.floorAtHydrostatic, input.calibratedRangeTvdFt as for every method
+ * @param input.fromIndex first sample to compute, 0 ≤ fromIndex ≤ n (default 0). The result
+ *   then holds samples fromIndex…n−1 only (arrays of length n − fromIndex; warning indices
+ *   count from fromIndex), each equal to the same sample of a run from 0: the whole arrays
+ *   stay the search context for Ze, Sv(Ze) and Ph(Ze). For updates of a deepening well.
  * @returns ppPsi (psi), flags, warnings, equivalentDepthFt (ft), effectiveStressPsi (psi)
  * @throws ShalepointError E_LENGTH on length mismatch; E_NOT_SORTED when tvdFt decreases;
  *   E_NOT_MONOTONIC when the trend is not strictly monotonic; E_RANGE for a bad searchTopTvdFt
@@ -159,11 +163,28 @@ export function equivalentDepthPorePressure(input: {
   searchTopTvdFt?: number;
   floorAtHydrostatic?: boolean;
   calibratedRangeTvdFt?: { topFt: number; baseFt: number };
+  fromIndex?: number;
 }): EquivalentDepthResult {
   const { tvdFt, overburdenPsi, hydrostaticPsi, observed, trend } = input;
   const n = tvdFt.length;
   requireLengths(n, { tvdFt, overburdenPsi, hydrostaticPsi, observed });
   checkLimitOptions(n, input);
+  const from = input.fromIndex ?? 0;
+  if (!(Number.isInteger(from) && from >= 0 && from <= n)) {
+    throw new ShalepointError("E_RANGE", "fromIndex must be a sample index from 0 to the sample count", {
+      param: "fromIndex",
+      value: from,
+      allowed: `integer 0–${n}`,
+      hint: "Pass the first sample that needs computing, or leave fromIndex out for the whole well.",
+    });
+  }
+  const m = n - from;
+  // The limits are applied to the computed samples only.
+  const limits = {
+    floorAtHydrostatic: input.floorAtHydrostatic,
+    calibratedRangeTvdFt: input.calibratedRangeTvdFt,
+    tvdFt: from === 0 ? input.tvdFt : tailOf(tvdFt, from),
+  };
   for (let i = 1; i < n; i++) {
     if (tvdFt[i] < tvdFt[i - 1]) {
       throw new ShalepointError("E_NOT_SORTED", "tvdFt must be non-decreasing", { param: "tvdFt", value: tvdFt[i], unit: "ft", row: i });
@@ -206,13 +227,16 @@ export function equivalentDepthPorePressure(input: {
     throw new ShalepointError("E_RANGE", "searchTopTvdFt must be finite", { param: "searchTopTvdFt", value: top, unit: "ft" });
   }
 
-  const raw = new Float64Array(n).fill(NaN);
-  const ze = new Float64Array(n).fill(NaN);
-  const sig = new Float64Array(n).fill(NaN);
-  const flags = new Uint8Array(n);
+  // Output k holds sample from + k.
+  const raw = new Float64Array(m).fill(NaN);
+  const ze = new Float64Array(m).fill(NaN);
+  const sig = new Float64Array(m).fill(NaN);
+  const flags = new Uint8Array(m);
+  const svOut = from === 0 ? overburdenPsi : tailOf(overburdenPsi, from);
+  const phOut = from === 0 ? hydrostaticPsi : tailOf(hydrostaticPsi, from);
   if (!Number.isFinite(top) || n === 0) {
-    for (let i = 0; i < n; i++) flags[i] = PP_FLAG_MISSING_INPUT;
-    const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth", true);
+    flags.fill(PP_FLAG_MISSING_INPUT);
+    const done = finishPorePressure(raw, svOut, phOut, flags, limits, "Equivalent depth", true);
     return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
   }
 
@@ -232,16 +256,19 @@ export function equivalentDepthPorePressure(input: {
     }
   }
 
+  // Search hints only speed the searches up (each finds the same index from any start).
   let cursor = 0;
+  if (from > 0 && sampledZ !== undefined && sampledZ.length >= 2) cursor = Math.max(0, bracketIndexNear(sampledZ, tvdFt[from], 0));
   let hintA = 0;
   let hintLo = 0;
-  for (let i = 0; i < n; i++) {
+  for (let i = from; i < n; i++) {
+    const k = i - from;
     const z = tvdFt[i];
     const x = observed[i];
     const sv = overburdenPsi[i];
     const ph = hydrostaticPsi[i];
     if (!(Number.isFinite(z) && Number.isFinite(x) && Number.isFinite(sv) && Number.isFinite(ph))) {
-      flags[i] = PP_FLAG_MISSING_INPUT;
+      flags[k] = PP_FLAG_MISSING_INPUT;
       continue;
     }
     let tz: number;
@@ -256,20 +283,20 @@ export function equivalentDepthPorePressure(input: {
       }
     } else tz = trendAt(z);
     if (!Number.isFinite(tz) || z < top) {
-      flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
+      flags[k] = PP_FLAG_NO_EQUIVALENT_DEPTH;
       continue;
     }
     const d = (x - tz) * s;
     if (d >= 0) {
       // Normal or more compacted than the trend at Z: Ze = Z, Pp = Ph.
-      ze[i] = z;
-      sig[i] = sv - ph;
-      raw[i] = ph;
-      if (d > 0) flags[i] = PP_FLAG_CLIPPED_AT_HYDROSTATIC;
+      ze[k] = z;
+      sig[k] = sv - ph;
+      raw[k] = ph;
+      if (d > 0) flags[k] = PP_FLAG_CLIPPED_AT_HYDROSTATIC;
       continue;
     }
     if ((x - tTop) * s < 0) {
-      flags[i] = PP_FLAG_NO_EQUIVALENT_DEPTH;
+      flags[k] = PP_FLAG_NO_EQUIVALENT_DEPTH;
       continue;
     }
     // g(ze) = (trend(ze) − x)·s is ≤ 0 at top and > 0 at z.
@@ -336,13 +363,18 @@ export function equivalentDepthPorePressure(input: {
     const svE = lo < 0 ? NaN : pieceValue(tvdFt, overburdenPsi, lo, zE);
     const phE = lo < 0 ? NaN : pieceValue(tvdFt, hydrostaticPsi, lo, zE);
     if (!(Number.isFinite(svE) && Number.isFinite(phE))) {
-      flags[i] = PP_FLAG_MISSING_INPUT;
+      flags[k] = PP_FLAG_MISSING_INPUT;
       continue;
     }
-    ze[i] = zE;
-    sig[i] = svE - phE;
-    raw[i] = sv - (svE - phE);
+    ze[k] = zE;
+    sig[k] = svE - phE;
+    raw[k] = sv - (svE - phE);
   }
-  const done = finishPorePressure(raw, overburdenPsi, hydrostaticPsi, flags, input, "Equivalent depth", true);
+  const done = finishPorePressure(raw, svOut, phOut, flags, limits, "Equivalent depth", true);
   return { ...done, equivalentDepthFt: ze, effectiveStressPsi: sig };
+}
+
+/** Samples from `from` on, without copying a typed array. */
+function tailOf(a: ArrayLike<number>, from: number): ArrayLike<number> {
+  return ArrayBuffer.isView(a) ? (a as Float64Array).subarray(from) : Array.prototype.slice.call(a, from);
 }

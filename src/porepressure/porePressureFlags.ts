@@ -250,10 +250,12 @@ export function flagWarnings(flags: Uint8Array, tvdFt: ArrayLike<number> | undef
  * `flagWarnings(oldFlags, ·, methodName)`; falls back to the full count when `oldWarnings`
  * holds a code that is not a flag warning.
  *
- * @param input.oldFlags the previous result's flags (one byte per old sample)
+ * @param input.oldFlags the previous result's flags (one byte per old sample), or only those
+ *   from `oldFlagsOffset` on (enough: only samples from `from` on are read)
+ * @param input.oldFlagsOffset index in the old well of oldFlags[0] (default 0, at most `from`)
  * @param input.oldWarnings the previous result's flag warnings
  * @param input.flags the new flags (length ≥ from), equal to oldFlags above `from`
- * @param input.from first recomputed sample index, 0 ≤ from ≤ oldFlags.length
+ * @param input.from first recomputed sample index, oldFlagsOffset ≤ from ≤ oldFlagsOffset + oldFlags.length
  * @param input.tvdFt TVD below RT of each new sample, ft (for the warnings' depths), or undefined
  * @param input.methodName method name that starts each message, e.g. "Eaton"
  * @returns one counted warning per problem flag kind present in `flags`
@@ -262,6 +264,7 @@ export function flagWarnings(flags: Uint8Array, tvdFt: ArrayLike<number> | undef
  */
 export function splicedFlagWarnings(input: {
   oldFlags: Uint8Array;
+  oldFlagsOffset?: number;
   oldWarnings: readonly Warning[];
   flags: Uint8Array;
   from: number;
@@ -269,12 +272,18 @@ export function splicedFlagWarnings(input: {
   methodName: string;
 }): Warning[] {
   const { oldFlags, oldWarnings, flags, from, tvdFt, methodName } = input;
+  const offset = input.oldFlagsOffset ?? 0;
+  const oldLength = offset + oldFlags.length;
   const oldByCode = new Map<string, Warning>();
   for (const w of oldWarnings) oldByCode.set(w.code, w);
-  if (!(from >= 0 && from <= oldFlags.length && from <= flags.length) || oldWarnings.some((w) => !WARNING_BITS.some((b) => b.code === w.code))) {
+  if (
+    !(from >= offset && from <= oldLength && from <= flags.length) ||
+    oldWarnings.some((w) => !WARNING_BITS.some((b) => b.code === w.code))
+  ) {
+    // Without the old flags from `from` on, fall back to the full count.
     return flagWarnings(flags, tvdFt, methodName);
   }
-  const gone = flagByteHistogram(oldFlags, from, oldFlags.length);
+  const gone = flagByteHistogram(oldFlags, from - offset, oldFlags.length);
   const added = flagByteHistogram(flags, from, flags.length);
   const out: Warning[] = [];
   for (const { bit, code, text } of WARNING_BITS) {

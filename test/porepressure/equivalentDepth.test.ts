@@ -47,6 +47,28 @@ describe("equivalentDepthPorePressure", () => {
     expect(Math.abs(r.ppPsi[i] - 7041)).toBeLessThanOrEqual(0.5);
   });
 
+  it("fromIndex computes only the deeper samples, each equal to the whole run's (bit for bit), with the whole well as context", () => {
+    const w = linearWell();
+    // Own case: observed values below the trend from 6000 ft on (overpressure), so Ze lies
+    // far above the first computed sample and the search must see the shallow samples.
+    const observed = w.tvdFt.map((z) => (z >= 6000 ? sonicTrend(z) + 0.002 * (z - 5500) : sonicTrend(z)));
+    const tz = Float64Array.from({ length: 1201 }, (_, k) => 10 * k);
+    const input = { ...w, observed, trend: { kind: "sampled" as const, tvdFt: tz, values: tz.map(sonicTrend) } };
+    const whole = equivalentDepthPorePressure(input);
+    const from = 16; // 8000 ft
+    const part = equivalentDepthPorePressure({ ...input, fromIndex: from });
+    expect(part.ppPsi.length).toBe(25 - from);
+    expect(Array.from(part.ppPsi)).toEqual(Array.from(whole.ppPsi.subarray(from)));
+    expect(Array.from(part.equivalentDepthFt)).toEqual(Array.from(whole.equivalentDepthFt.subarray(from)));
+    expect(Array.from(part.effectiveStressPsi)).toEqual(Array.from(whole.effectiveStressPsi.subarray(from)));
+    expect(Array.from(part.flags)).toEqual(Array.from(whole.flags.subarray(from)));
+    // the matched depths lie above fromIndex's depth: the context was used
+    expect(part.equivalentDepthFt[0]).toBeLessThan(w.tvdFt[from] - 1000);
+    expect(equivalentDepthPorePressure({ ...input, fromIndex: 25 }).ppPsi.length).toBe(0);
+    expect(() => equivalentDepthPorePressure({ ...input, fromIndex: 26 })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
+    expect(() => equivalentDepthPorePressure({ ...input, fromIndex: 1.5 })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
+  });
+
   it("a sampled trend (10 ft steps) gives the same Ze within 0.5 ft (linear interpolation error ≈ h²c/8 ≈ 0.004 ft)", () => {
     const w = linearWell();
     const observed = w.tvdFt.map((z) => (z === 9000 ? 110 : sonicTrend(z)));

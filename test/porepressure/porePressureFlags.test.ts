@@ -57,4 +57,17 @@ describe("splicedFlagWarnings", () => {
     // By hand: below hydrostatic at 3, 4, 5.
     expect(w).toEqual([{ code: "W_PP_BELOW_HYDROSTATIC", message: "Bowers: 3 sample(s) below hydrostatic; first at sample 3", index: 3, count: 3 }]);
   });
+
+  it("needs only the old flags from `from` on (oldFlagsOffset): same warnings as with the whole old array (own case)", () => {
+    const oldFlags = Uint8Array.of(0, B, 0, B, M);
+    const oldWarnings = flagWarnings(oldFlags, undefined, "Eaton");
+    const flags = Uint8Array.of(0, B, 0, 0, O, B, B);
+    const whole = splicedFlagWarnings({ oldFlags, oldWarnings, flags, from: 3, tvdFt: undefined, methodName: "Eaton" });
+    const tail = splicedFlagWarnings({ oldFlags: oldFlags.slice(3), oldFlagsOffset: 3, oldWarnings, flags, from: 3, tvdFt: undefined, methodName: "Eaton" });
+    expect(tail).toEqual(whole);
+    // Counted by hand as above: overburden clip at 4 (1), below hydrostatic at 1, 5, 6 (3).
+    expect(tail.map((x) => [x.count, x.index])).toEqual([[1, 4], [3, 1]]);
+    // An offset past `from` cannot be updated: the full count is returned (still right).
+    expect(splicedFlagWarnings({ oldFlags: oldFlags.slice(4), oldFlagsOffset: 4, oldWarnings, flags, from: 3, tvdFt: undefined, methodName: "Eaton" })).toEqual(whole);
+  });
 });
