@@ -1,7 +1,8 @@
 /**
  * While-drilling update of a pore-pressure prediction: append new depth samples (a new LAS
  * chunk) and refresh every curve from the shallowest sample the new data can change,
- * without re-running the whole well. The result equals {@link predictPorePressure} on the
+ * without re-running the whole well or copying it (a state's arrays have room to grow and
+ * an update writes into them: see {@link appendDepthSamples}). The result equals {@link predictPorePressure} on the
  * concatenated well bit for bit (the same arithmetic runs in the same order; the test in
  * test/pipeline/incrementalPorePressure.test.ts proves it on a demo well).
  *
@@ -65,6 +66,49 @@ export interface IncrementalPorePressureState {
   overburdenRun: { anchorIndex: number; sumPsi: Float64Array; compPsi: Float64Array };
   /** First sample index the last update recomputed (0 for a fresh start). */
   recomputedFromIndex: number;
+  /** Storage with room to grow, shared with the states before and after this one. */
+  room: GrowthRoom;
+}
+
+/**
+ * The buffers a chain of while-drilling states grows into. Every per-sample array of a
+ * state is a view of length n on a buffer allocated here with room for more samples, so an
+ * update writes only the samples it recomputes instead of copying the whole well; a buffer
+ * is re-allocated (1.5 times the samples) only when it is full. `length` is the sample
+ * count of the latest state: only that state may be extended.
+ */
+export interface GrowthRoom {
+  /** Samples of the latest state; NaN after an update that failed part-way. */
+  length: number;
+  /** Buffers allocated for this chain (never a caller's buffer). */
+  buffers: WeakSet<ArrayBufferLike>;
+}
+
+type SampleArray = Float64Array | Uint8Array | Int32Array;
+
+/**
+ * A view of length n on `a`'s buffer when that buffer is the room's and long enough (no
+ * copy: samples below a.length are a's), otherwise a copy of a into a new room buffer with
+ * room for 50 % more samples. Samples from a.length on are for the caller to write.
+ */
+function extend<T extends SampleArray>(room: GrowthRoom, a: T, n: number): T {
+  const Ctor = a.constructor as { new (buffer: ArrayBufferLike, byteOffset: number, length: number): T; BYTES_PER_ELEMENT: number };
+  if (room.buffers.has(a.buffer) && a.byteOffset === 0 && a.buffer.byteLength >= n * Ctor.BYTES_PER_ELEMENT) {
+    return new Ctor(a.buffer, 0, n);
+  }
+  const capacity = n + Math.max(4096, n >> 1);
+  const buffer = new ArrayBuffer(capacity * Ctor.BYTES_PER_ELEMENT);
+  room.buffers.add(buffer);
+  const out = new Ctor(buffer, 0, n);
+  out.set(a.length > n ? a.subarray(0, n) : a);
+  return out;
+}
+
+function superseded(): ShalepointError {
+  return new ShalepointError("E_STATE_SUPERSEDED", "this while-drilling state was already extended (or an update of it failed part-way)", {
+    param: "state",
+    hint: "Pass the state returned by the last appendDepthSamples call, or call startWhileDrilling again on the well so far.",
+  });
 }
 
 /** New depth samples below the current end of the well, in internal units. */
@@ -122,7 +166,8 @@ function overburdenRunFrom(ob: OverburdenResult, tvdFt: Float64Array): Increment
 
 /**
  * Start a while-drilling prediction: run {@link predictPorePressure} once and keep what the
- * updates need.
+ * updates need, in buffers with room for the samples to come (the caller's well is copied,
+ * never written).
  *
  * @param well the well drilled so far (internal units, curves keyed by role)
  * @param options as for {@link predictPorePressure}, without calibration refits
@@ -133,15 +178,69 @@ function overburdenRunFrom(ob: OverburdenResult, tvdFt: Float64Array): Increment
  */
 export function startWhileDrilling(well: Well, options: PorePressurePredictionOptions): IncrementalPorePressureState {
   checkOptions(options);
-  const prediction = predictPorePressure(well, options);
-  return { well, options, prediction, overburdenRun: overburdenRunFrom(prediction.overburden, prediction.tvdFt), recomputedFromIndex: 0 };
+  return ownedState(well, options, predictPorePressure(well, options), 0);
 }
 
-function concat(a: ArrayLike<number>, b: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(a.length + b.length);
-  out.set(a as Float64Array);
-  for (let i = 0; i < b.length; i++) out[a.length + i] = b[i];
-  return out;
+/**
+ * An independent copy of a while-drilling state: extend the copy and keep the original (for
+ * a before/after comparison, or to try a chunk and go back). {@link appendDepthSamples}
+ * extends a state's buffers in place, so without a copy only the latest state stays valid.
+ *
+ * @param state the latest state of a chain (from {@link startWhileDrilling} or
+ *   {@link appendDepthSamples})
+ * @returns a state with the same values in buffers of its own
+ * @throws ShalepointError E_STATE_SUPERSEDED when `state` was already extended
+ * @example const before = copyWhileDrillingState(state); state = appendDepthSamples(state, chunk);
+ */
+export function copyWhileDrillingState(state: IncrementalPorePressureState): IncrementalPorePressureState {
+  if (state.room.length !== state.prediction.tvdFt.length) throw superseded();
+  return ownedState(state.well, state.options, state.prediction, state.recomputedFromIndex, state.overburdenRun);
+}
+
+/** A state whose per-sample arrays are copies in the buffers of a new room. */
+function ownedState(
+  well: Well,
+  options: PorePressurePredictionOptions,
+  p: PorePressurePrediction,
+  recomputedFromIndex: number,
+  run = overburdenRunFrom(p.overburden, p.tvdFt),
+): IncrementalPorePressureState {
+  const room: GrowthRoom = { length: p.tvdFt.length, buffers: new WeakSet() };
+  const r = <T extends SampleArray>(a: T): T => extend(room, a, a.length);
+  const ro = <T extends SampleArray>(a: T | undefined): T | undefined => (a === undefined ? undefined : r(a));
+  const curves: Record<string, Curve> = {};
+  for (const [role, c] of Object.entries(well.curves)) curves[role] = { ...c, values: r(Float64Array.from(c.values)) };
+  const tvdFt = r(Float64Array.from(well.tvdFt));
+  const ownWell: Well = { ...well, mdFt: r(Float64Array.from(well.mdFt)), tvdFt, curves };
+  const m = p.methods;
+  const methods: PorePressurePrediction["methods"] = {};
+  if (m.eatonSonic) methods.eatonSonic = { ...m.eatonSonic, ppPsi: r(m.eatonSonic.ppPsi), flags: r(m.eatonSonic.flags) };
+  if (m.eatonResistivity) methods.eatonResistivity = { ...m.eatonResistivity, ppPsi: r(m.eatonResistivity.ppPsi), flags: r(m.eatonResistivity.flags) };
+  if (m.bowers) methods.bowers = { ...m.bowers, ppPsi: r(m.bowers.ppPsi), flags: r(m.bowers.flags), effectiveStressPsi: r(m.bowers.effectiveStressPsi) };
+  if (m.equivalentDepth) {
+    const e = m.equivalentDepth;
+    methods.equivalentDepth = { ...e, ppPsi: r(e.ppPsi), flags: r(e.flags), equivalentDepthFt: r(e.equivalentDepthFt), effectiveStressPsi: r(e.effectiveStressPsi) };
+  }
+  const ob = p.overburden;
+  const prediction: PorePressurePrediction = {
+    ...p,
+    tvdFt,
+    tvdssFt: r(p.tvdssFt),
+    bmlFt: r(p.bmlFt),
+    // The prediction's GR is the well's (as predictPorePressure copies it).
+    curves: { grApi: curves.gammaRay?.values, dtUsPerFt: ro(p.curves.dtUsPerFt), rhobGcc: ro(p.curves.rhobGcc), resOhmM: ro(p.curves.resOhmM) },
+    badHole: r(p.badHole),
+    overburden: { ...ob, svPsi: r(ob.svPsi), gradientPsiPerFt: r(ob.gradientPsiPerFt), emwPpg: r(ob.emwPpg), densityUsedGcc: r(ob.densityUsedGcc), source: r(ob.source) },
+    hydrostaticPsi: r(p.hydrostaticPsi),
+    shale: { ...p.shale, isShale: r(p.shale.isShale), grUsedApi: r(p.shale.grUsedApi) },
+    shaleLine: { dtUsPerFt: ro(p.shaleLine.dtUsPerFt), resOhmM: ro(p.shaleLine.resOhmM) },
+    sonicTrend: p.sonicTrend && { ...p.sonicTrend, values: r(p.sonicTrend.values) },
+    resistivityTrend: p.resistivityTrend && { ...p.resistivityTrend, values: r(p.resistivityTrend.values) },
+    methods,
+    ppPsi: (methods[p.primary] as { ppPsi: Float64Array }).ppPsi,
+  };
+  const overburdenRun = { anchorIndex: run.anchorIndex, sumPsi: r(run.sumPsi), compPsi: r(run.compPsi) };
+  return { well: ownWell, options, prediction, overburdenRun, recomputedFromIndex, room };
 }
 
 /**
@@ -161,16 +260,10 @@ function velocityAtOnset(tvdFt: Float64Array, dtUsPerFt: Float64Array, depthFt: 
   return velocityAtDepth(tvdFt.subarray(a, j + 1), velocityFromSlownessLog(dtUsPerFt.subarray(a, j + 1)), depthFt);
 }
 
-function grow(old: Float64Array, n: number): Float64Array {
-  const out = new Float64Array(n);
-  out.set(old.subarray(0, Math.min(old.length, n)));
-  return out;
-}
-
-function spliceDespiked(oldClean: Float64Array | undefined, raw: Float64Array | undefined, from: number, despike: boolean): Float64Array | undefined {
+function spliceDespiked(room: GrowthRoom, oldClean: Float64Array | undefined, raw: Float64Array | undefined, from: number, despike: boolean): Float64Array | undefined {
   if (raw === undefined || oldClean === undefined) return undefined;
   const n = raw.length;
-  const out = grow(oldClean, n);
+  const out = extend(room, oldClean, n);
   if (!despike) {
     out.set(raw.subarray(from), from);
     return out;
@@ -181,7 +274,8 @@ function spliceDespiked(oldClean: Float64Array | undefined, raw: Float64Array | 
   return out;
 }
 
-function appendWell(well: Well, chunk: DepthSampleChunk): Well {
+/** Check a chunk against the well's end (before anything is written). */
+function checkChunk(well: Well, chunk: DepthSampleChunk): void {
   const m = chunk.tvdFt.length;
   const n0 = well.tvdFt.length;
   if (chunk.mdFt.length !== m) {
@@ -203,15 +297,26 @@ function appendWell(well: Well, chunk: DepthSampleChunk): Well {
       });
     }
   }
-  const curves: Record<string, Curve> = {};
-  for (const [role, curve] of Object.entries(well.curves)) {
+  for (const role of Object.keys(well.curves)) {
     const add = chunk.curves[role];
     if (add !== undefined && add.length !== m) {
       throw new ShalepointError("E_LENGTH", `chunk curve ${role} must have one value per sample`, { param: `chunk.curves.${role}`, value: `${add.length} vs ${m}` });
     }
-    curves[role] = { ...curve, values: concat(curve.values, add ?? new Float64Array(m).fill(NaN)) };
   }
-  return { ...well, mdFt: concat(well.mdFt, chunk.mdFt), tvdFt: concat(well.tvdFt, chunk.tvdFt), curves };
+}
+
+/** The well with the chunk's samples written after its end (a role missing in the chunk: NaN). */
+function appendWell(room: GrowthRoom, well: Well, chunk: DepthSampleChunk): Well {
+  const n0 = well.tvdFt.length;
+  const m = chunk.tvdFt.length;
+  const put = (a: ArrayLike<number>, add: ArrayLike<number> | undefined): Float64Array => {
+    const out = extend(room, a as Float64Array, n0 + m);
+    for (let i = 0; i < m; i++) out[n0 + i] = add === undefined ? NaN : add[i];
+    return out;
+  };
+  const curves: Record<string, Curve> = {};
+  for (const [role, curve] of Object.entries(well.curves)) curves[role] = { ...curve, values: put(curve.values, chunk.curves[role]) };
+  return { ...well, mdFt: put(well.mdFt, chunk.mdFt), tvdFt: put(well.tvdFt, chunk.tvdFt), curves };
 }
 
 function windowKey(z: number, wFt: number): number {
@@ -220,6 +325,7 @@ function windowKey(z: number, wFt: number): number {
 
 /** Shale pick on the new well: keep old points wholly above the safe depth, re-pick the rest. */
 function updateShalePick(
+  room: GrowthRoom,
   old: ShalePick,
   tvdFt: Float64Array,
   grRaw: Float64Array,
@@ -283,11 +389,9 @@ function updateShalePick(
     take(points.values[k], op.values[k], tp.values[k]);
   }
   // Per-sample arrays: sample i ≥ t (slice index ≥ t − s) is exact in the tail pick.
-  const isShale = new Uint8Array(n);
-  isShale.set(old.isShale.subarray(0, t));
+  const isShale = extend(room, old.isShale, n);
   isShale.set(tail.isShale.subarray(t - s), t);
-  const grUsedApi = new Float64Array(n);
-  grUsedApi.set(old.grUsedApi.subarray(0, t));
+  const grUsedApi = extend(room, old.grUsedApi, n);
   grUsedApi.set(tail.grUsedApi.subarray(t - s), t);
   const spikes: number[] = [];
   for (const i of old.spikeIndex) if (i < t) spikes.push(i);
@@ -315,6 +419,7 @@ function countWhile(n: number, ok: (p: number) => boolean): number {
 
 /** Shale line refreshed from the last kept point with a value: returns the line and its restart index. */
 function updateShaleLine(
+  room: GrowthRoom,
   oldLine: Float64Array,
   points: ShalePoints,
   values: Float64Array,
@@ -325,7 +430,7 @@ function updateShaleLine(
   let zKeep = -Infinity;
   for (let p = 0; p < points.tvdFt.length && points.tvdFt[p] < keptBelowFt; p++) if (Number.isFinite(values[p])) zKeep = points.tvdFt[p];
   const from = countWhile(tvdFt.length, (i) => !(tvdFt[i] > zKeep));
-  const line = grow(oldLine, tvdFt.length);
+  const line = extend(room, oldLine, tvdFt.length);
   const tail = interpolateShaleLine({ pointTvdFt: points.tvdFt, pointValues: values, tvdFt: tvdFt.subarray(from), maxGapFt });
   line.set(tail, from);
   return { line, from };
@@ -336,6 +441,7 @@ function sameTrend(a: TrendOutcome | undefined, b: { trend: unknown }): boolean 
 }
 
 function updateTrend(
+  room: GrowthRoom,
   old: TrendOutcome | undefined,
   choice: TrendChoice | undefined,
   pick: ShalePick,
@@ -360,11 +466,13 @@ function updateTrend(
     fitted = fitCompactionTrendSegments({ kind: choice.kind, bmlFt: pointBml, values: pointValues, method: choice.method ?? "huber", segments: choice.segments });
   }
   if (sameTrend(old, fitted)) {
-    const values = grow(old.values, bmlFt.length);
+    const values = extend(room, old.values, bmlFt.length);
     values.set(evaluateCompactionTrend({ trend: fitted.trend, bmlFt: bmlFt.subarray(nOld) }), nOld);
     return { outcome: { ...fitted, values }, from: nOld };
   }
-  return { outcome: { ...fitted, values: evaluateCompactionTrend({ trend: fitted.trend, bmlFt }) }, from: 0 };
+  const values = extend(room, old.values, bmlFt.length);
+  values.set(evaluateCompactionTrend({ trend: fitted.trend, bmlFt }));
+  return { outcome: { ...fitted, values }, from: 0 };
 }
 
 /**
@@ -372,16 +480,24 @@ function updateTrend(
  * whole well: counted again only over the recomputed part, from the old counts (same
  * warnings as flagWarnings on the spliced flags).
  */
-function spliceResult<T extends PorePressureResult>(old: T | undefined, tail: PorePressureResult, from: number, n: number, tvdFt: Float64Array, methodName: string): PorePressureResult {
-  const ppPsi = old ? grow(old.ppPsi, n) : new Float64Array(n);
-  const flags = new Uint8Array(n);
-  if (old) flags.set(old.flags.subarray(0, Math.min(from, old.flags.length)));
+function spliceResult(room: GrowthRoom, old: PorePressureResult | undefined, tail: PorePressureResult, from: number, n: number, tvdFt: Float64Array, methodName: string): PorePressureResult {
+  if (!old) {
+    const ppPsi = new Float64Array(n);
+    const flags = new Uint8Array(n);
+    ppPsi.set(tail.ppPsi, from);
+    flags.set(tail.flags, from);
+    return { ppPsi, flags, warnings: flagWarnings(flags, tvdFt, methodName) };
+  }
+  const nOld = old.flags.length;
+  // The old flags that the tail replaces, read before the shared buffer is written.
+  const oldTailFlags = from <= nOld ? old.flags.slice(from) : undefined;
+  const ppPsi = extend(room, old.ppPsi, n);
+  const flags = extend(room, old.flags, n);
   ppPsi.set(tail.ppPsi, from);
   flags.set(tail.flags, from);
-  const warnings =
-    old && from <= old.flags.length
-      ? splicedFlagWarnings({ oldFlags: old.flags, oldWarnings: old.warnings, flags, from, tvdFt, methodName })
-      : flagWarnings(flags, tvdFt, methodName);
+  const warnings = oldTailFlags
+    ? splicedFlagWarnings({ oldFlags: oldTailFlags, oldFlagsOffset: from, oldWarnings: old.warnings, flags, from, tvdFt, methodName })
+    : flagWarnings(flags, tvdFt, methodName);
   return { ppPsi, flags, warnings };
 }
 
@@ -389,43 +505,59 @@ function spliceResult<T extends PorePressureResult>(old: T | undefined, tail: Po
  * Append new depth samples to a while-drilling prediction and refresh every curve from the
  * shallowest sample the new data can change (see the file header for each step's restart
  * point). The returned prediction equals {@link predictPorePressure} on the concatenated
- * well bit for bit; the input state is not changed.
+ * well bit for bit.
  *
- * @param state from {@link startWhileDrilling} or a previous call
+ * The update writes into the buffers of `state` (which hold room for new samples) instead
+ * of copying the whole well: the cost grows with the chunk and the restart distance, not
+ * with the well's length. The returned state supersedes `state`: its arrays keep their
+ * length, but samples from `recomputedFromIndex` on may now hold the refreshed values, and
+ * it cannot be extended again (E_STATE_SUPERSEDED). Keep a snapshot with
+ * {@link copyWhileDrillingState} before the call when you need the old values. The chunk
+ * and the well given to {@link startWhileDrilling} are never written.
+ *
+ * @param state the latest state, from {@link startWhileDrilling} or a previous call
  * @param chunk new samples below the current end (see {@link DepthSampleChunk})
  * @returns a new {@link IncrementalPorePressureState}; `recomputedFromIndex` says where the
  *   pointwise pore-pressure methods restarted
  * @throws ShalepointError E_DEPTH_ORDER when the chunk is not below the well's end;
- *   E_LENGTH for misaligned chunk curves; every error of the stage modules
+ *   E_LENGTH for misaligned chunk curves (both before anything is written);
+ *   E_STATE_SUPERSEDED when `state` was already extended, or an earlier update of this
+ *   chain failed part-way (start again with startWhileDrilling); every error of the stage
+ *   modules (after which the chain cannot be extended)
  * @example appendDepthSamples(state, { mdFt: [9000.5], tvdFt: [9000.5], curves: { gammaRay: [95], slowness: [120] } }).prediction.ppPsi
  */
 export function appendDepthSamples(state: IncrementalPorePressureState, chunk: DepthSampleChunk): IncrementalPorePressureState {
   const { options } = state;
   const old = state.prediction;
   const nOld = old.tvdFt.length;
-  const well = appendWell(state.well, chunk);
+  const room = state.room;
+  if (room.length !== nOld) throw superseded();
+  checkChunk(state.well, chunk);
+  if (chunk.tvdFt.length === 0) return { ...state, recomputedFromIndex: nOld };
+  // From here on the shared buffers are written: a failure part-way leaves the chain unusable.
+  room.length = NaN;
+  const well = appendWell(room, state.well, chunk);
   const n = well.tvdFt.length;
-  if (n === nOld) return { ...state, well, recomputedFromIndex: n };
   const despike = options.despike ?? true;
-  // appendWell built fresh arrays: the prediction shares them instead of copying again.
+  // The prediction shares the well's depth array.
   const tvdFt = well.tvdFt as Float64Array;
   // pointwise: only the new samples
   const tail = depthReferenceArrays({ tvdFt: tvdFt.subarray(nOld), datums: well.datums });
-  const tvdssFt = grow(old.tvdssFt, n);
+  const tvdssFt = extend(room, old.tvdssFt, n);
   tvdssFt.set(tail.tvdssFt, nOld);
-  const bmlFt = grow(old.bmlFt, n);
+  const bmlFt = extend(room, old.bmlFt, n);
   bmlFt.set(tail.bmlFt, nOld);
   const mudline = mudlineTvdFt(well.datums);
   const raw = (role: string): Float64Array | undefined => well.curves[role]?.values;
   const cleanFrom = Math.max(0, nOld - DESPIKE_HALF);
-  const dtUsPerFt = spliceDespiked(old.curves.dtUsPerFt, raw("slowness"), cleanFrom, despike);
-  const rhobGcc = spliceDespiked(old.curves.rhobGcc, raw("density"), cleanFrom, despike) as Float64Array;
-  const resOhmM = spliceDespiked(old.curves.resOhmM, raw("resistivity"), cleanFrom, despike);
+  const dtUsPerFt = spliceDespiked(room, old.curves.dtUsPerFt, raw("slowness"), cleanFrom, despike);
+  const rhobGcc = spliceDespiked(room, old.curves.rhobGcc, raw("density"), cleanFrom, despike) as Float64Array;
+  const resOhmM = spliceDespiked(room, old.curves.resOhmM, raw("resistivity"), cleanFrom, despike);
   const grApi = raw("gammaRay") as Float64Array;
 
   // bad hole: pointwise on the new samples
-  const badHole = new Uint8Array(n);
-  badHole.set(old.badHole);
+  const badHole = extend(room, old.badHole, n);
+  badHole.fill(0, nOld);
   const caliper = raw("caliper");
   const bitSize = raw("bitSize");
   if (caliper !== undefined && bitSize !== undefined) {
@@ -434,30 +566,30 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
 
   // overburden
   const ob = updateOverburden(state, tvdFt, rhobGcc, dtUsPerFt, badHole, cleanFrom);
-  const hydrostaticPsi = grow(old.hydrostaticPsi, n);
+  const hydrostaticPsi = extend(room, old.hydrostaticPsi, n);
   hydrostaticPsi.set(hydrostaticPressure({ tvdFt: tvdFt.subarray(nOld), datums: well.datums, gradientPsiPerFt: options.hydrostaticGradientPsiPerFt }), nOld);
 
   // shale points and lines
   const pointCurves: Record<string, Float64Array> = {};
   if (dtUsPerFt) pointCurves.dt = dtUsPerFt;
   if (resOhmM) pointCurves.res = resOhmM;
-  const { pick: shale, cutKeyDepthFt } = updateShalePick(old.shale, tvdFt, grApi, pointCurves, options, nOld);
+  const { pick: shale, cutKeyDepthFt } = updateShalePick(room, old.shale, tvdFt, grApi, pointCurves, options, nOld);
   const maxGapFt = options.shale.maxGapFt ?? 1000;
   const shaleLine: PorePressurePrediction["shaleLine"] = {};
   let from = Math.min(ob.from, cleanFrom, nOld);
   if (dtUsPerFt && old.shaleLine.dtUsPerFt) {
-    const r = updateShaleLine(old.shaleLine.dtUsPerFt, shale.points, shale.points.values.dt, cutKeyDepthFt, tvdFt, maxGapFt);
+    const r = updateShaleLine(room, old.shaleLine.dtUsPerFt, shale.points, shale.points.values.dt, cutKeyDepthFt, tvdFt, maxGapFt);
     shaleLine.dtUsPerFt = r.line;
     from = Math.min(from, r.from);
   }
   if (resOhmM && old.shaleLine.resOhmM) {
-    const r = updateShaleLine(old.shaleLine.resOhmM, shale.points, shale.points.values.res, cutKeyDepthFt, tvdFt, maxGapFt);
+    const r = updateShaleLine(room, old.shaleLine.resOhmM, shale.points, shale.points.values.res, cutKeyDepthFt, tvdFt, maxGapFt);
     shaleLine.resOhmM = r.line;
     from = Math.min(from, r.from);
   }
 
-  const sonic = updateTrend(old.sonicTrend, options.sonicTrend, shale, shale.points.values.dt, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
-  const resistivity = updateTrend(old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
+  const sonic = updateTrend(room, old.sonicTrend, options.sonicTrend, shale, shale.points.values.dt, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
+  const resistivity = updateTrend(room, old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
 
   const methods: PorePressurePrediction["methods"] = {};
   const sub = (a: Float64Array, f: number): Float64Array => a.subarray(f);
@@ -465,7 +597,7 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   const eatonFrom = (log: "sonic" | "resistivity", line: Float64Array, trend: Float64Array, f: number, oldResult: PorePressureResult | undefined, exponent: number) => {
     const ratio = eatonRatio({ log, observed: sub(line, f), trend: sub(trend, f) });
     const tail = eatonPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), tvdFt: sub(tvdFt, f), ratio, exponent });
-    return { ...spliceResult(oldResult, tail, f, n, tvdFt, "Eaton"), exponent };
+    return { ...spliceResult(room, oldResult, tail, f, n, tvdFt, "Eaton"), exponent };
   };
   if (options.eatonSonic && sonic.outcome && shaleLine.dtUsPerFt) {
     const exponent = options.eatonSonic.exponent ?? EATON_SONIC_EXPONENT;
@@ -485,8 +617,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
     const velocity = velocityFromSlownessLog(sub(shaleLine.dtUsPerFt, f));
     const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: velocity, tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
-    const r = spliceResult(old.methods.bowers, tail, f, n, tvdFt, "Bowers");
-    const es = f > 0 && old.methods.bowers ? grow(old.methods.bowers.effectiveStressPsi, n) : new Float64Array(n);
+    const r = spliceResult(room, old.methods.bowers, tail, f, n, tvdFt, "Bowers");
+    const es = f > 0 && old.methods.bowers ? extend(room, old.methods.bowers.effectiveStressPsi, n) : new Float64Array(n);
     es.set(tail.effectiveStressPsi, f);
     methods.bowers = { ...r, effectiveStressPsi: es, sigmaMaxPsi: tail.sigmaMaxPsi, vmaxFtPerS: tail.vmaxFtPerS, a, b, u: unloading?.u ?? 1 };
   }
@@ -500,27 +632,24 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     // of old samples in the longer depth array: true when that depth lies strictly above
     // the old well's last depth (the bracket search returns the last sample at or above Ze).
     const reuse = oldEd !== undefined && f > 0 && f < nOld && tvdFt[f - 1] < tvdFt[nOld - 1];
-    // Reused samples are handed in as missing (skipped at once) and then spliced back.
-    const observed = reuse ? new Float64Array(n) : shaleLine.dtUsPerFt;
-    if (reuse) {
-      observed.fill(NaN, 0, f);
-      observed.set(shaleLine.dtUsPerFt.subarray(f), f);
-    }
+    const start = reuse ? f : 0;
+    // Samples from `start` on, computed with the whole well as the search context.
     const ed = equivalentDepthPorePressure({
       overburdenPsi: ob.result.svPsi,
       hydrostaticPsi,
       tvdFt,
-      observed,
+      observed: shaleLine.dtUsPerFt,
       trend: { kind: "sampled", tvdFt: tvdFt.subarray(first), values: sonic.outcome.values.subarray(first) },
       searchTopTvdFt: Math.max(mudline, tvdFt[Math.min(first, n - 1)]),
+      fromIndex: start,
     });
     if (reuse && oldEd) {
-      ed.ppPsi.set(oldEd.ppPsi.subarray(0, f));
-      ed.flags.set(oldEd.flags.subarray(0, f));
-      ed.equivalentDepthFt.set(oldEd.equivalentDepthFt.subarray(0, f));
-      ed.effectiveStressPsi.set(oldEd.effectiveStressPsi.subarray(0, f));
-      // Flags above f are the old ones: count again only from f on.
-      methods.equivalentDepth = { ...ed, warnings: splicedFlagWarnings({ oldFlags: oldEd.flags, oldWarnings: oldEd.warnings, flags: ed.flags, from: f, tvdFt, methodName: "Equivalent depth" }) };
+      const r = spliceResult(room, oldEd, ed, start, n, tvdFt, "Equivalent depth");
+      const zeFt = extend(room, oldEd.equivalentDepthFt, n);
+      zeFt.set(ed.equivalentDepthFt, start);
+      const es = extend(room, oldEd.effectiveStressPsi, n);
+      es.set(ed.effectiveStressPsi, start);
+      methods.equivalentDepth = { ...r, equivalentDepthFt: zeFt, effectiveStressPsi: es };
     } else methods.equivalentDepth = ed;
   }
   const warnings: Warning[] = [...ob.result.warnings, ...shale.warnings];
@@ -545,7 +674,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     calibration: {},
     warnings,
   };
-  return { well, options, prediction, overburdenRun: ob.run, recomputedFromIndex: Math.min(from, sonic.from, resistivity.from) };
+  room.length = n;
+  return { well, options, prediction, overburdenRun: ob.run, recomputedFromIndex: Math.min(from, sonic.from, resistivity.from), room };
 }
 
 function updateOverburden(
@@ -563,9 +693,9 @@ function updateOverburden(
   const filled = (s: number): boolean => s === OverburdenSource.interpolated || s === OverburdenSource.extendedLastValue;
   let from = cleanFrom;
   while (from - 1 > anchor && filled(old.source[from - 1])) from--;
-  const source = new Uint8Array(n);
-  source.set(old.source.subarray(0, from));
-  const rho = grow(old.densityUsedGcc, n);
+  const room = state.room;
+  const source = extend(room, old.source, n);
+  const rho = extend(room, old.densityUsedGcc, n);
   const gardner = dtUsPerFt ? gardnerDensityFromSlowness({ slownessUsPerFt: dtUsPerFt.subarray(from) }) : undefined;
   const PENDING = 255;
   for (let i = from; i < n; i++) {
@@ -583,9 +713,9 @@ function updateOverburden(
     }
   }
   fillPendingDensity({ tvdFt, rhoGcc: rho, source, lastKnownIndex: from - 1, pending: PENDING });
-  const sumPsi = grow(state.overburdenRun.sumPsi, n);
-  const compPsi = grow(state.overburdenRun.compPsi, n);
-  const svPsi = grow(old.svPsi, n);
+  const sumPsi = extend(room, state.overburdenRun.sumPsi, n);
+  const compPsi = extend(room, state.overburdenRun.compPsi, n);
+  const svPsi = extend(room, old.svPsi, n);
   let sum = sumPsi[from - 1];
   let comp = compPsi[from - 1];
   for (let i = from; i < n; i++) {
@@ -597,8 +727,8 @@ function updateOverburden(
     compPsi[i] = comp;
     svPsi[i] = sum + comp;
   }
-  const gradientPsiPerFt = grow(old.gradientPsiPerFt, n);
-  const emwPpg = grow(old.emwPpg, n);
+  const gradientPsiPerFt = extend(room, old.gradientPsiPerFt, n);
+  const emwPpg = extend(room, old.emwPpg, n);
   for (let i = from; i < n; i++) {
     gradientPsiPerFt[i] = tvdFt[i] > 0 ? svPsi[i] / tvdFt[i] : NaN;
     emwPpg[i] = gradientPsiPerFt[i] / PSI_PER_FT_PER_PPG;

@@ -7,7 +7,7 @@
 import { describe, it, expect } from "vitest";
 import { loadDemoWell } from "./demoWells.js";
 import { predictPorePressure, type PorePressurePredictionOptions, type PorePressurePrediction } from "../../src/pipeline/predictPorePressure.js";
-import { startWhileDrilling, appendDepthSamples, type DepthSampleChunk } from "../../src/pipeline/incrementalPorePressure.js";
+import { startWhileDrilling, appendDepthSamples, copyWhileDrillingState, type DepthSampleChunk } from "../../src/pipeline/incrementalPorePressure.js";
 import type { Well } from "../../src/well/types.js";
 
 const a1 = loadDemoWell("quillon-a1");
@@ -151,6 +151,36 @@ describe("appendDepthSamples", () => {
     state = appendDepthSamples(state, chunk(b1.well, start + 700, nB));
     expect(state.prediction.methods.bowers!.vmaxFtPerS).toBe(fullB1.methods.bowers!.vmaxFtPerS);
     expectSame(state.prediction, fullB1);
+  });
+
+  it("extends a state's buffers in place: only the latest state may be extended; a copy stays as it was", () => {
+    let start = 0;
+    while (a1.well.tvdFt[start] < mudline + 4300 + 500) start++;
+    const given = head(a1.well, start);
+    const givenTvd = Float64Array.from(given.tvdFt);
+    const s0 = startWhileDrilling(given, optionsFor());
+    const kept = copyWhileDrillingState(s0);
+    const keptPp = Float64Array.from(kept.prediction.ppPsi);
+    const s1 = appendDepthSamples(s0, chunk(a1.well, start, start + 400));
+    // s0 was extended: appending to it again (a branch) is refused with a typed error
+    expect(() => appendDepthSamples(s0, chunk(a1.well, start, start + 10))).toThrow(expect.objectContaining({ code: "E_STATE_SUPERSEDED" }));
+    expect(() => copyWhileDrillingState(s0)).toThrow(expect.objectContaining({ code: "E_STATE_SUPERSEDED" }));
+    // the copy is untouched and can take its own, different chunk
+    expect(firstDiff(kept.prediction.ppPsi, keptPp)).toBe(-1);
+    const k1 = appendDepthSamples(kept, chunk(a1.well, start, start + 37));
+    expect(k1.prediction.ppPsi.length).toBe(start + 37);
+    // both chains reach the same end and equal the full run
+    const endA = appendDepthSamples(s1, chunk(a1.well, start + 400, n));
+    const endB = appendDepthSamples(k1, chunk(a1.well, start + 37, n));
+    expectSame(endA.prediction, full);
+    expectSame(endB.prediction, full);
+    // the caller's well was copied, never written
+    expect(firstDiff(given.tvdFt, givenTvd)).toBe(-1);
+    expect(given.tvdFt.length).toBe(start);
+    // an empty chunk changes nothing and keeps the state extendable
+    const same = appendDepthSamples(endA, chunk(a1.well, n, n));
+    expect(same.prediction).toBe(endA.prediction);
+    expect(appendDepthSamples(same, chunk(a1.well, n, n)).prediction.ppPsi.length).toBe(n);
   });
 
   it("rejects samples above the current end and calibration refits", () => {
