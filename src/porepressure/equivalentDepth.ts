@@ -203,9 +203,14 @@ export function equivalentDepthPorePressure(input: {
       throw new ShalepointError("E_TOO_FEW", "a sampled trend needs at least 2 samples", { param: "trend.tvdFt", value: tz.length, allowed: "≥ 2" });
     }
     const dir = Math.sign(tv[1] - tv[0]);
+    if (!(dir !== 0)) notMonotonic("trend.values", tv[1]);
+    // One comparison pair per sample (this check runs on every call, also while drilling).
     for (let k = 1; k < tz.length; k++) {
-      if (!(tz[k] > tz[k - 1])) notMonotonic("trend.tvdFt", tz[k]);
-      if (!(Math.sign(tv[k] - tv[k - 1]) === dir && dir !== 0)) notMonotonic("trend.values", tv[k]);
+      const up = tv[k] > tv[k - 1];
+      if (!(tz[k] > tz[k - 1] && (dir > 0 ? up : tv[k] < tv[k - 1]))) {
+        if (!(tz[k] > tz[k - 1])) notMonotonic("trend.tvdFt", tz[k]);
+        notMonotonic("trend.values", tv[k]);
+      }
     }
     trendAt = (z) => interpolate(tz, tv, z);
     sampledZ = tz;
