@@ -47,7 +47,9 @@ function quantile(sorted, p) {
 }
 var sink = 0; // var: the memory probe runs before this line is reached
 function consume(r) {
-  if (r && typeof r === "object") sink += Object.keys(r).length;
+  // Touch the result cheaply: Object.keys on a typed array would build one string per element.
+  if (ArrayBuffer.isView(r)) sink += r.byteLength;
+  else if (r && typeof r === "object") sink += Object.keys(r).length;
 }
 /**
  * Time one stage with tinybench: `warmup` untimed calls, then at least `runs` timed calls
