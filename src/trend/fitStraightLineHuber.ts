@@ -31,10 +31,43 @@ export interface HuberLineFit extends StraightLineFit {
   converged: boolean;
 }
 
-function median(values: Float64Array): number {
-  const s = Float64Array.from(values).sort();
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m] : 0.5 * (s[m - 1] + s[m]);
+/**
+ * Median of finite values, by selection in `scratch` (overwritten; length ≥ values.length):
+ * the same order statistics as a full sort, found in linear expected time (Hoare 1961,
+ * "Algorithm 65: Find", Communications of the ACM 4(7):321–322).
+ */
+function median(values: Float64Array, scratch: Float64Array): number {
+  const n = values.length;
+  const a = scratch;
+  a.set(values);
+  const m = n >> 1;
+  // Partition until a[m] holds the m-th smallest, with a[0..m−1] ≤ a[m] ≤ a[m+1..n−1].
+  let lo = 0;
+  let hi = n - 1;
+  while (lo < hi) {
+    const pivot = a[(lo + hi) >> 1];
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while (a[i] < pivot) i++;
+      while (a[j] > pivot) j--;
+      if (i <= j) {
+        const t = a[i];
+        a[i] = a[j];
+        a[j] = t;
+        i++;
+        j--;
+      }
+    }
+    if (m <= j) hi = j;
+    else if (m >= i) lo = i;
+    else break;
+  }
+  if (n % 2) return a[m];
+  // The (m−1)-th smallest is the largest value left of m.
+  let below = a[0];
+  for (let k = 1; k < m; k++) if (a[k] > below) below = a[k];
+  return 0.5 * (below + a[m]);
 }
 
 /**
@@ -80,6 +113,8 @@ export function fitStraightLineHuber({
   let fit = fitStraightLine({ x, y, weights: w });
   const tol = 1e-12 * Math.max(yMax - yMin, Number.MIN_VALUE);
   const r = new Float64Array(usable.length);
+  const dev = new Float64Array(usable.length);
+  const scratch = new Float64Array(usable.length);
   let scale = NaN;
   let iterations = 0;
   let converged = false;
@@ -88,10 +123,9 @@ export function fitStraightLineHuber({
       const i = usable[j];
       r[j] = y[i] - fit.intercept - fit.slope * x[i];
     }
-    const med = median(r);
-    const dev = new Float64Array(r.length);
+    const med = median(r, scratch);
     for (let j = 0; j < r.length; j++) dev[j] = Math.abs(r[j] - med);
-    scale = median(dev) / NORMAL_MAD_FACTOR;
+    scale = median(dev, scratch) / NORMAL_MAD_FACTOR;
     // a perfect fit of most points: keep a tiny floor so outliers get a weight near zero
     const s = Math.max(scale, tol);
     for (let j = 0; j < usable.length; j++) {

@@ -78,6 +78,29 @@ describe("fitStraightLineHuber", () => {
     expect(hub.weights[5]).toBeLessThan(0.05);
     expect(hub.nDownweighted).toBeGreaterThanOrEqual(1);
   });
+  it("scale is the normalised MAD of the final residuals: median |r − median r| / 0.6745 (Hampel 1974, JASA 69:383–393; sorted by hand here)", () => {
+    // Even and odd point counts, with tied residuals: the median must be the textbook one.
+    for (const y of [
+      [0.05, 1.98, 4.03, 5.97, 8.02, 50, 12.01, 13.96, 16.04, 17.98],
+      [0.05, 1.98, 4.03, 5.97, 8.02, 50, 12.01, 13.96, 16.04],
+      [0, 2, 4, 6, 8, 10, 12, 14.5, 16, 18, -3],
+    ]) {
+      const x = y.map((_, i) => i);
+      const hub = fitStraightLineHuber({ x, y });
+      // The scale is computed from the residuals of the fit before the last weight update,
+      // which equals the final fit at convergence (to the 1e-12 stopping tolerance).
+      const r = y.map((v, i) => v - hub.intercept - hub.slope * x[i]);
+      const med = (v: number[]): number => {
+        const s = [...v].sort((a, b) => a - b);
+        const m = s.length >> 1;
+        return s.length % 2 ? s[m] : 0.5 * (s[m - 1] + s[m]);
+      };
+      const m = med(r);
+      const mad = med(r.map((v) => Math.abs(v - m)));
+      expect(hub.converged).toBe(true);
+      expect(hub.scale).toBeCloseTo(mad / 0.6744897501960817, 9);
+    }
+  });
   it("equals least squares on data with no residual beyond k·s (weights all 1)", () => {
     const x = [0, 1, 2, 3, 4];
     const y = [0, 1, 2, 3, 4.000001];
