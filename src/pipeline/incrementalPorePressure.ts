@@ -208,10 +208,11 @@ function ownedState(
   const room: GrowthRoom = { length: p.tvdFt.length, buffers: new WeakSet() };
   const r = <T extends SampleArray>(a: T): T => extend(room, a, a.length);
   const ro = <T extends SampleArray>(a: T | undefined): T | undefined => (a === undefined ? undefined : r(a));
+  const own = (a: ArrayLike<number>): Float64Array => r(a instanceof Float64Array ? a : Float64Array.from(a));
   const curves: Record<string, Curve> = {};
-  for (const [role, c] of Object.entries(well.curves)) curves[role] = { ...c, values: r(Float64Array.from(c.values)) };
-  const tvdFt = r(Float64Array.from(well.tvdFt));
-  const ownWell: Well = { ...well, mdFt: r(Float64Array.from(well.mdFt)), tvdFt, curves };
+  for (const [role, c] of Object.entries(well.curves)) curves[role] = { ...c, values: own(c.values) };
+  const tvdFt = own(well.tvdFt);
+  const ownWell: Well = { ...well, mdFt: own(well.mdFt), tvdFt, curves };
   const m = p.methods;
   const methods: PorePressurePrediction["methods"] = {};
   if (m.eatonSonic) methods.eatonSonic = { ...m.eatonSonic, ppPsi: r(m.eatonSonic.ppPsi), flags: r(m.eatonSonic.flags) };
