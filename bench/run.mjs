@@ -126,6 +126,17 @@ async function benchSize(n) {
   const dtRaw = well.curves.slowness.values;
   const tvdFt = well.tvdFt;
   const badHole = sp.flagBadHole({ caliperIn: well.curves.caliper.values, bitSizeIn: well.curves.bitSize.values }).isBadHole;
+  if (want("floor") && n === 200000) {
+    // The machine's floor for per-sample work, for reading the pipeline figures: one pass
+    // over 200,000 samples that reads one array and writes another, with nothing, one
+    // Math.exp or one Math.log per sample (into a reused array, so no allocation is timed).
+    const src = Float64Array.from(dtRaw, (v) => (Number.isFinite(v) ? v : 100));
+    const dst = new Float64Array(n);
+    record("floor: copy loop (read + write)", n, await measure(() => { for (let i = 0; i < n; i++) dst[i] = src[i] * 0.5; return dst; }));
+    record("floor: Math.exp per sample", n, await measure(() => { for (let i = 0; i < n; i++) dst[i] = Math.exp(-1e-2 * src[i]); return dst; }));
+    record("floor: Math.log per sample", n, await measure(() => { for (let i = 0; i < n; i++) dst[i] = Math.log(src[i]); return dst; }));
+    record("floor: new Float64Array filled", n, await measure(() => { const a = new Float64Array(n); for (let i = 0; i < n; i++) a[i] = src[i]; return a; }));
+  }
   if (want("despike")) {
     record("despike (Hampel, 11 samples)", n, await measure(() => sp.despikeLog({ values: dtRaw, window: { samples: 11 }, threshold: 3 })));
   }
