@@ -9,7 +9,7 @@
  * - input curves, one file each, NaN for nulls: tvd, gr, dt, rhob, res, cali, bs (.f64);
  * - meta.json: sample count, datums, the bench options (bench/benchOptions.mjs), file list,
  *   and the fitted trend parameters and shale-point count of shalepoint's run;
- * - shalepoint's results, prefixed "sp_": despiked dt/rhob/res, sv, hydrostatic, shale-line
+ * - shalepoint's results, prefixed "sp_": despiked gr/dt/rhob/res, sv, hydrostatic, shale-line
  *   dt and res, sonic and resistivity trends, and the pore pressure of Eaton sonic, Eaton
  *   resistivity, Bowers and equivalent depth (.f64).
  * Bench-only tooling: nothing in the tests or CI needs it. Invented data only (fictional
@@ -56,6 +56,7 @@ const sp = await import(pathToFileURL(path.join(root, "dist/index.js")).href);
 const options = benchOptions();
 const p = sp.predictPorePressure(well, options);
 const results = {
+  grClean: writeF64("sp_grClean", p.shale.grUsedApi),
   dtClean: writeF64("sp_dtClean", p.curves.dtUsPerFt),
   rhobClean: writeF64("sp_rhobClean", p.curves.rhobGcc),
   resClean: writeF64("sp_resClean", p.curves.resOhmM),
