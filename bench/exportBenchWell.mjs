@@ -11,7 +11,7 @@
  *   and the fitted trend parameters and shale-point count of shalepoint's run;
  * - shalepoint's results, prefixed "sp_": despiked gr/dt/rhob/res, sv, hydrostatic, shale-line
  *   dt and res, sonic and resistivity trends, and the pore pressure of Eaton sonic, Eaton
- *   resistivity, Bowers and equivalent depth (.f64).
+ *   resistivity, Bowers and equivalent depth (.f64) with their per-sample flag bits (.u8).
  * Bench-only tooling: nothing in the tests or CI needs it. Invented data only (fictional
  * Quillon Basin).
  */
@@ -72,6 +72,17 @@ const results = {
   equivalentDepthPp: writeF64("sp_equivalentDepthPp", p.methods.equivalentDepth.ppPsi),
 };
 
+function writeU8(name, values) {
+  fs.writeFileSync(path.join(outDir, `${name}.u8`), Uint8Array.from(values));
+  return `${name}.u8`;
+}
+const flags = {
+  eatonSonic: writeU8("sp_eatonSonicFlags", p.methods.eatonSonic.flags),
+  eatonResistivity: writeU8("sp_eatonResistivityFlags", p.methods.eatonResistivity.flags),
+  bowers: writeU8("sp_bowersFlags", p.methods.bowers.flags),
+  equivalentDepth: writeU8("sp_equivalentDepthFlags", p.methods.equivalentDepth.flags),
+};
+
 const meta = {
   samples,
   well: well.name,
@@ -80,6 +91,7 @@ const meta = {
   files,
   shalepoint: {
     results,
+    flags,
     shalePointCount: p.shale.points.tvdFt.length,
     shaleSampleCount: p.shale.isShale.reduce((s, v) => s + v, 0),
     badHoleCount: p.badHole.reduce((s, v) => s + v, 0),

@@ -39,7 +39,7 @@ Stages, each as in the shalepoint module named beside it:
                                                                       (trend/evaluateCompactionTrend.ts)
   eatonSonic / eatonResistivity
               Eaton (1975): Pp = Sv - (Sv - Ph) r^n, r = trend/dt (n 3) or R/trend (n 1.2),
-              clipped to Sv                                           (porepressure/eaton.ts)
+              clipped to Sv, flag bits as porePressureFlags.ts        (porepressure/eaton.ts)
   bowers      Bowers (1995) virgin curve V = 5000 + A sigma^B, A 10, B 0.75, on the DT
               shale line; V < V0 gives Pp = Sv; clipped to Sv         (porepressure/bowersPorePressure.ts)
   equivalentDepth
@@ -303,9 +303,28 @@ def eval_trend(kind, params, bml):
     return np.where(ok, v, np.nan)
 
 
+# Pore-pressure flag bits, as in src/porepressure/porePressureFlags.ts.
+MISSING, CLIPPED_AT_SV, BELOW_HYDROSTATIC, RAISED_TO_HYDROSTATIC, NO_EQUIVALENT_DEPTH = 1, 2, 4, 8, 16
+
+
+def finish(raw, sv, ph, flags):
+    """Clip to Sv and flag, as finishPorePressure: NaN -> missing (unless no equivalent
+    depth), above Sv -> Sv (flag 2), below hydrostatic -> kept (flag 4)."""
+    with np.errstate(invalid="ignore"):
+        nan = np.isnan(raw) | ((flags & (MISSING | NO_EQUIVALENT_DEPTH)) != 0)
+        clip = raw > sv
+        pp = np.where(clip, sv, raw)
+        below = pp < ph
+    pp[nan] = np.nan
+    flags = flags | np.where(nan & ((flags & NO_EQUIVALENT_DEPTH) == 0), MISSING, 0).astype(np.uint8)
+    flags |= np.where(~nan & clip, CLIPPED_AT_SV, 0).astype(np.uint8)
+    flags |= np.where(~nan & below, BELOW_HYDROSTATIC, 0).astype(np.uint8)
+    return pp, flags
+
+
 def eaton(sv, ph, ratio, exponent):
-    pp = sv - (sv - ph) * ratio**exponent
-    return np.minimum(pp, sv)  # NaN in any input stays NaN
+    raw = sv - (sv - ph) * ratio**exponent  # NaN in any input stays NaN
+    return finish(raw, sv, ph, np.zeros(raw.size, dtype=np.uint8))
 
 
 def eaton_ratio(observed, trend, sonic):
@@ -318,9 +337,11 @@ def bowers(sv, ph, dt_line, a, b, v0=5000.0):
     with np.errstate(divide="ignore", invalid="ignore"):
         v = np.where(dt_line > 0, 1e6 / dt_line, np.nan)
         sigma = ((v - v0) / a) ** (1.0 / b)
-    pp = np.where(v < v0, sv, sv - sigma)
-    pp[~(np.isfinite(sv) & np.isfinite(v) & np.isfinite(ph))] = np.nan
-    return np.minimum(pp, sv)
+        slow = v < v0  # no effective stress on the curve: Pp = Sv, flagged
+    raw = np.where(slow, sv, sv - sigma)
+    missing = ~(np.isfinite(sv) & np.isfinite(v) & np.isfinite(ph))
+    flags = np.where(missing, MISSING, np.where(slow, CLIPPED_AT_SV, 0)).astype(np.uint8)
+    return finish(raw, sv, ph, flags)
 
 
 def equivalent_depth(tvd, sv, ph, observed, trend, first, search_top):
@@ -334,17 +355,23 @@ def equivalent_depth(tvd, sv, ph, observed, trend, first, search_top):
     tz = trend.copy()  # the trend at each sample's own depth (it is sampled there)
     tz[:first] = np.nan
     x = observed
+    missing = ~(np.isfinite(tvd) & np.isfinite(x) & np.isfinite(sv) & np.isfinite(ph))
     with np.errstate(invalid="ignore"):
-        normal = (x - tz) * sgn >= 0
-        beyond = (x - t_top) * sgn < 0
+        off_trend = ~missing & (~np.isfinite(tz) | (tvd < search_top))
+        d = (x - tz) * sgn
+        normal = ~missing & ~off_trend & (d >= 0)
+        beyond = ~missing & ~off_trend & ~normal & ((x - t_top) * sgn < 0)
     # Inverse interpolation of the trend: depth as a function of the trend value.
     inc, inc_z = (t, t_tvd) if sgn > 0 else (t[::-1], t_tvd[::-1])
     ze = np.clip(np.interp(x, inc, inc_z), search_top, tvd)
     sigma_e = np.interp(ze, tvd, sv) - np.interp(ze, tvd, ph)
-    pp = np.where(normal, ph, sv - sigma_e)
-    bad = ~(np.isfinite(x) & np.isfinite(sv) & np.isfinite(ph) & np.isfinite(tz)) | (tvd < search_top)
-    pp[bad | (~normal & beyond)] = np.nan
-    return np.minimum(pp, sv)
+    raw = np.where(normal, ph, sv - sigma_e)
+    flags = (
+        np.where(missing, MISSING, 0)
+        | np.where(off_trend | beyond, NO_EQUIVALENT_DEPTH, 0)
+        | np.where(normal & (d > 0), RAISED_TO_HYDROSTATIC, 0)
+    ).astype(np.uint8)
+    return finish(raw, sv, ph, flags)
 
 
 # ---------------------------------------------------------------------------------------
@@ -393,15 +420,15 @@ def run_pipeline(well, meta, clock, despike=despike_hampel):
     res_trend = eval_trend("resistivityLogLinear", res_params, bml)
     clock("trendEval")
 
-    pp_es = eaton(sv, ph, eaton_ratio(line_dt, sonic_trend, True), 3.0)
+    pp_es, fl_es = eaton(sv, ph, eaton_ratio(line_dt, sonic_trend, True), 3.0)
     clock("eatonSonic")
-    pp_er = eaton(sv, ph, eaton_ratio(line_res, res_trend, False), 1.2)
+    pp_er, fl_er = eaton(sv, ph, eaton_ratio(line_res, res_trend, False), 1.2)
     clock("eatonResistivity")
-    pp_b = bowers(sv, ph, line_dt, opt["bowers"]["a"], opt["bowers"]["b"])
+    pp_b, fl_b = bowers(sv, ph, line_dt, opt["bowers"]["a"], opt["bowers"]["b"])
     clock("bowers")
 
     first = int(np.argmax(np.isfinite(sonic_trend) & (bml > 0)))
-    pp_ed = equivalent_depth(tvd, sv, ph, line_dt, sonic_trend, first, max(mudline, tvd[first]))
+    pp_ed, fl_ed = equivalent_depth(tvd, sv, ph, line_dt, sonic_trend, first, max(mudline, tvd[first]))
     clock("equivalentDepth")
 
     return {
@@ -409,6 +436,7 @@ def run_pipeline(well, meta, clock, despike=despike_hampel):
         "shaleLineDt": line_dt, "shaleLineRes": line_res, "sonicTrend": sonic_trend,
         "resistivityTrend": res_trend, "eatonSonicPp": pp_es, "eatonResistivityPp": pp_er,
         "bowersPp": pp_b, "equivalentDepthPp": pp_ed,
+        "_flags": {"eatonSonic": fl_es, "eatonResistivity": fl_er, "bowers": fl_b, "equivalentDepth": fl_ed},
         "_params": {"sonic": sonic_params, "res": res_params, "points": int(pts["tvd"].size)},
     }
 
@@ -457,6 +485,9 @@ def main():
             "maxAbsDiff": float(np.max(np.abs(ours[both] - ref[both]))) if both.any() else None,
             "onlyOneFinite": int(np.count_nonzero(np.isfinite(ref) != np.isfinite(ours))),
         }
+    for name, fname in meta["shalepoint"]["flags"].items():
+        ref = np.fromfile(os.path.join(args.folder, fname), dtype=np.uint8)
+        agreement[name + "Flags"] = {"samplesDiffering": int(np.count_nonzero(ref != result["_flags"][name]))}
     sp = meta["shalepoint"]
     p = result["_params"]
     agreement["trendParams"] = {
