@@ -501,6 +501,8 @@ def main():
         "samples": meta["samples"],
         "medianMs": round(float(np.median(totals)), 3),
         "minMs": round(float(np.min(totals)), 3),
+        "p25Ms": round(float(np.percentile(totals, 25)), 3),
+        "p75Ms": round(float(np.percentile(totals, 75)), 3),
         "runs": args.runs,
         "despike": "plain (two sorts)" if args.plain_despike else "median filter + MAD count",
         "stagesMs": {k: round(float(np.median(v)), 3) for k, v in stages.items()},

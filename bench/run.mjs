@@ -137,6 +137,29 @@ async function benchSize(n) {
     record("floor: Math.log per sample", n, await measure(() => { for (let i = 0; i < n; i++) dst[i] = Math.log(src[i]); return dst; }));
     record("floor: new Float64Array filled", n, await measure(() => { const a = new Float64Array(n); for (let i = 0; i < n; i++) a[i] = src[i]; return a; }));
   }
+  if (want("numpy")) {
+    // The same pore-pressure stages written as a clean vectorised numpy script
+    // (bench/numpyReference.py), on the same generated well, when this machine's python3 has
+    // numpy and scipy (bench-only; tests and CI never need them). Its JSON line also reports
+    // how closely its curves agree with shalepoint's.
+    const probe = spawnSync("python3", ["-c", "import numpy, scipy"], { encoding: "utf8" });
+    if (probe.status === 0) {
+      const dir = fs.mkdtempSync(path.join(os.tmpdir(), "shalepoint-numpy-"));
+      try {
+        const ex = spawnSync(process.execPath, [path.join(here, "exportBenchWell.mjs"), String(n), dir], { encoding: "utf8" });
+        if (ex.status !== 0) throw new Error(`exportBenchWell failed: ${ex.stderr}`);
+        const py = spawnSync("python3", [path.join(here, "numpyReference.py"), dir, "--runs", quick ? "5" : "15"], { encoding: "utf8", maxBuffer: 1 << 24 });
+        if (py.status !== 0) throw new Error(`numpyReference.py failed: ${py.stderr}`);
+        const j = JSON.parse(py.stdout.trim().split("\n").pop());
+        const worst = Math.max(...["eatonSonicPp", "eatonResistivityPp", "bowersPp", "equivalentDepthPp"].map((k) => j.agreement?.[k]?.maxAbsDiff ?? NaN));
+        record("numpy reference: same pore-pressure stages", n, { medianMs: j.medianMs, p25Ms: j.p25Ms, p75Ms: j.p75Ms, minMs: j.minMs, runs: j.runs, load1: os.loadavg()[0] }, { numpy: j.numpy, despikeMs: j.stagesMs?.despike, worstPpDiffPsi: worst });
+      } finally {
+        fs.rmSync(dir, { recursive: true, force: true });
+      }
+    } else {
+      console.log("numpy reference: skipped (python3 with numpy and scipy not found)");
+    }
+  }
   if (want("despike")) {
     record("despike (Hampel, 11 samples)", n, await measure(() => sp.despikeLog({ values: dtRaw, window: { samples: 11 }, threshold: 3 })));
   }
