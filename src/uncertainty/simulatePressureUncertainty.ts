@@ -32,13 +32,14 @@
  * depth by depth, R pore pressures and R fracture pressures go into two scratch buffers
  * where the statistics are taken. Memory is O(R + depths); no R × depths matrix exists.
  * For log-linear trends ln(ratio) = a'_r + b'_r·Z − ln(obs) is linear in depth, so each
- * sample costs one exp (ratio^n = exp(n·ln ratio)); Bowers costs one exp per sample
- * (ln(V − V0) once per depth). The exponential-to-matrix sonic trend is stepped in depth:
- * E_r = e^(a_r + b_r·Z) is multiplied by e^(b_r·ΔZ) (shared while ΔZ repeats) and
- * ln(Δtm + E_r) is advanced by the series of ln(1 + δ), so a sample again costs one exp;
- * the state is evaluated directly at every 64th depth index (and after a gap or a segment
- * change), which bounds the rounding drift (measured ≤ 5e-11 psi on a 40,000-depth run) and
- * makes the result at a depth depend only on the inputs since its block of 64 began.
+ * sample costs one exp (ratio^n = exp(n·ln ratio), by the table exponential of
+ * tableExponential.ts for the exponential-to-matrix trend, Math.exp otherwise); Bowers costs
+ * one exp per sample (ln(V − V0) once per depth). The exponential-to-matrix sonic trend
+ * ln(Δtm + e^(a_r + b_r·Z)) is evaluated directly at the first depth of every block of 64
+ * depth indices, with its degree-5 Taylor coefficients in Z, and the other depths of the
+ * block use that polynomial (remainder < 6.5e-17 while |b_r|·|Z − Z₀| ≤ 6e-3, else the depth
+ * becomes a new anchor), so a sample again costs one exp, with no log or division and no
+ * drift; the result at a depth depends only on the inputs since its block of 64 began.
  *
  * Imports: ../errors.js, siblings of this folder, and the type-only trend shapes.
  */
@@ -207,45 +208,64 @@ function fillEatonLogLinearTrend(
 }
 
 /**
- * Depth indices per block (64) of the exponential-trend recurrence: the trend state is computed exactly
- * at every multiple of this index (and after any gap or segment change), so the rounding of
- * the recurrence never runs longer than one block and any run split at a block boundary
+ * Depth indices per block (64) of the exponential-trend expansion: the trend is evaluated
+ * exactly at the first depth of every block of this many indices (and again inside a block
+ * after a segment change or once the expansion would reach too far), so the result at a depth
+ * depends only on the inputs since its block began and any run split at a block boundary
  * gives the same bits.
  */
 export const MONTE_CARLO_DEPTH_BLOCK = 64;
 const TREND_ANCHOR_BLOCK = MONTE_CARLO_DEPTH_BLOCK;
-/** |relative step| up to which ln(1 + δ) is taken from its series (error < δ⁶/6 < 1e-17). */
-const LOG1P_SERIES_MAX = 2e-3;
+/**
+ * Largest |b|·|Z − Z_anchor| at which the degree-5 Taylor expansion of ln(Δtm + e^(a + bZ)) is
+ * used: its remainder is below (|b|·|ΔZ|)⁶/720 ≤ 6.5e-17 (the sixth derivative is b⁶ times a
+ * polynomial in w = E/(Δtm + E) bounded by 1 on [0, 1]), under a tenth of an ulp of ln Δt.
+ */
+const TAYLOR_REACH_MAX = 6e-3;
 
-/** Per-realisation state of the exponential-to-matrix trend: E = e^(a + bZ), ln(Δtm + E), step factor. */
+/**
+ * Per-realisation Taylor coefficients of the exponential-to-matrix trend about the anchor
+ * depth Z₀ of the current block: ln(Δtm + e^(a + bZ)) = Σ c_k·(Z − Z₀)^k, k = 0..5.
+ */
 interface ExponentialTrendState {
-  e: Float64Array;
-  lnTrend: Float64Array;
-  step: Float64Array;
-  /** Depth step ΔZ₀ (ft) the step factors e^(b·ΔZ₀) were made for in this block (NaN = none yet). */
-  stepDz: number;
+  c0: Float64Array;
+  c1: Float64Array;
+  c2: Float64Array;
+  c3: Float64Array;
+  c4: Float64Array;
+  c5: Float64Array;
 }
 
 /**
  * Eaton with the exponential-to-matrix sonic trend at an anchor depth (the first of a
- * 64-depth block, or after a gap or segment change): ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt
- * with E and ln(Δtm + E) evaluated directly; they seed the stepped depths that follow
- * ({@link stepEatonExponentialFused}).
+ * 64-depth block, or after a segment change or a long reach): ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt
+ * with E = e^(a_r + b_r·Z) and ln(Δtm + E) evaluated directly; it also stores the Taylor
+ * coefficients about this depth used by the depths that follow ({@link stepEatonExponentialFused}).
+ * With w = E/(Δtm + E) and v = w(1 − w), the derivatives of ln(Δtm + e^(a + bZ)) are
+ * b·w, b²·v, b³·v(1 − 2w), b⁴·v(1 − 6w + 6w²), b⁵·v(1 − 2w)(1 − 12w + 12w²) (from dw/dZ = b·v);
+ * c_k is the k-th derivative over k!.
  */
 function fillEatonExponentialTrend(
   out: Float64Array, scratch: Float64Array, R: number, a: Float64Array, b: Float64Array, dtMatrix: number, n: Float64Array,
   f: Float64Array, z: number, lnObs: number, sv: number, ph: number, st: ExponentialTrendState,
 ): void {
-  const e = st.e;
-  const lt = st.lnTrend;
+  const { c0, c1, c2, c3, c4, c5 } = st;
   for (let r = 0; r < R; r++) {
-    const er = Math.exp(a[r] + b[r] * z);
-    e[r] = er;
+    const br = b[r];
+    const er = Math.exp(a[r] + br * z);
     const l = Math.log(dtMatrix + er);
-    lt[r] = l;
+    const w = er / (dtMatrix + er);
+    const v = w * (1 - w);
+    const b2 = br * br;
+    c0[r] = l;
+    c1[r] = br * w;
+    c2[r] = (b2 * v) / 2;
+    c3[r] = (b2 * br * v * (1 - 2 * w)) / 6;
+    c4[r] = (b2 * b2 * v * (1 - 6 * w + 6 * w * w)) / 24;
+    c5[r] = (b2 * b2 * br * v * (1 - 2 * w) * (1 - 12 * w + 12 * w * w)) / 120;
     scratch[r] = n[r] * (l - lnObs);
   }
-  // ratio^n by the same table exponential as the stepped depths (tableExponential.ts).
+  // ratio^n by the same table exponential as the other depths (tableExponential.ts).
   expByTableInto({ x: scratch, out, count: R });
   for (let r = 0; r < R; r++) {
     const svr = sv * f[r];
@@ -255,55 +275,32 @@ function fillEatonExponentialTrend(
 }
 
 /**
- * One stepped depth of the exponential-to-matrix trend (not an anchor depth) fused with the
- * fracture pressure, the moments and the exceedance counts: each realisation is read and
- * written once per depth; mom gets [s1, s2, shift, nBelow, nAbove]. The step: from the
- * previous depth E ← E·e^(b·ΔZ₀)·e^(b·(ΔZ − ΔZ₀)), where the step factors e^(b·ΔZ₀) are
- * shared while the step repeats and the small remainder e^x, |x| ≤ 1e-6, is 1 + x + x²/2
- * (error below x³/6 < 2e-19); and ln(Δtm + E) ← ln(Δtm + E) + ln(1 + δ), δ = ΔE/(Δtm + E_prev),
- * by its series when |δ| ≤ 2e-3, else by a direct log. The fracture and moments arithmetic is
- * that of fractureAndMoments, operation for operation and in the same realisation order.
+ * One depth of the exponential-to-matrix trend after the anchor of its block, fused with the
+ * fracture pressure, the moments and the exceedance counts; mom gets [s1, s2, shift, nBelow,
+ * nAbove]. The trend is the degree-5 Taylor expansion about the anchor,
+ * ln(Δtm + E) = c0 + t(c1 + t(c2 + t(c3 + t(c4 + t·c5)))), t = Z − Z₀ (|b|·|t| ≤ 6e-3, remainder
+ * < 6.5e-17), so no log and no division per sample, and no state carried from depth to depth.
+ * The fracture and moments arithmetic is that of fractureAndMoments, operation for operation
+ * and in the same realisation order.
  */
 function stepEatonExponentialFused(
-  pp: Float64Array, fr: Float64Array, R: number, b: Float64Array, dtMatrix: number, n: Float64Array, f: Float64Array,
-  kF: Float64Array, lnObs: number, sv: number, ph: number, st: ExponentialTrendState, dzOff: number, mudPsi: number,
+  pp: Float64Array, fr: Float64Array, R: number, n: Float64Array, f: Float64Array,
+  kF: Float64Array, lnObs: number, sv: number, ph: number, st: ExponentialTrendState, t: number, mudPsi: number,
   mom: Float64Array,
 ): void {
-  const e = st.e;
-  const lt = st.lnTrend;
-  const step = st.step;
+  const { c0, c1, c2, c3, c4, c5 } = st;
   let shift = 0;
   let s1 = 0;
   let s2 = 0;
   let nBelow = 0;
   let nAbove = 0;
-  // Loops with a call spill every live value around it, so the trend step (no call in its
-  // usual path), the exp and the call-free pressure/fracture/moments pass are three loops
-  // (one loop doing all three measured about 1.5 times slower: too many live arrays).
-  if (dzOff === 0) {
-    for (let r = 0; r < R; r++) {
-      const e0 = e[r];
-      const e1 = e0 * step[r];
-      e[r] = e1;
-      const d = (e1 - e0) / (dtMatrix + e0);
-      lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
-        ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
-        : Math.log(dtMatrix + e1);
-    }
-  } else {
-    for (let r = 0; r < R; r++) {
-      const xr = b[r] * dzOff;
-      const e0 = e[r];
-      const e1 = e0 * (step[r] * (1 + xr * (1 + 0.5 * xr)));
-      e[r] = e1;
-      const d = (e1 - e0) / (dtMatrix + e0);
-      lt[r] = d <= LOG1P_SERIES_MAX && d >= -LOG1P_SERIES_MAX
-        ? lt[r] + d * (1 + d * (-0.5 + d * (1 / 3 + d * (-0.25 + d * (0.2 - d / 6)))))
-        : Math.log(dtMatrix + e1);
-    }
+  // The trend and exponent, the exponential and the pressure/fracture/moments pass are three
+  // loops: one loop doing all of it measured about 1.5 times slower (too many live arrays).
+  for (let r = 0; r < R; r++) {
+    const lnTrend = c0[r] + t * (c1[r] + t * (c2[r] + t * (c3[r] + t * (c4[r] + t * c5[r]))));
+    fr[r] = n[r] * (lnTrend - lnObs); // fr holds the exponent until the pass below
   }
-  // ratio^n = e^(n·ln ratio) by the table exponential (tableExponential.ts), one loop of its own.
-  for (let r = 0; r < R; r++) fr[r] = n[r] * (lt[r] - lnObs);
+  // ratio^n = e^(n·ln ratio) by the table exponential (tableExponential.ts).
   expByTableInto({ x: fr, out: pp, count: R });
   {
     const svr = sv * f[0];
@@ -616,13 +613,11 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
   const isResistivity = trendKind === "resistivityLogLinear";
   const isExpTrend = trendKind === "sonicExponential";
   const hasUnloading = uArr.length > 0;
-  const expState: ExponentialTrendState = {
-    e: new Float64Array(isExpTrend ? R : 0), lnTrend: new Float64Array(isExpTrend ? R : 0), step: new Float64Array(isExpTrend ? R : 0),
-    stepDz: NaN,
-  };
-  let trendAt = -1; // depth index the exponential-trend state belongs to
-  let trendSeg = -1;
-  let trendZ = NaN;
+  const coeff = (): Float64Array => new Float64Array(isExpTrend ? R : 0);
+  const expState: ExponentialTrendState = { c0: coeff(), c1: coeff(), c2: coeff(), c3: coeff(), c4: coeff(), c5: coeff() };
+  let anchorBlock = -1; // block (depth index / 64) of the expansion held in expState
+  let anchorSeg = -1;
+  let anchorZ = NaN;
 
   for (let i = i0; i < i1; i++) {
     const o = i - i0; // output position
@@ -640,30 +635,21 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
         while (k + 1 < segTops.length && z >= segTops[k + 1]) k++;
         const seg = segDraws[k];
         if (isExpTrend) {
-          // Step on from depth i − 1 inside an anchor block; otherwise evaluate exactly.
-          // The step factors are remade at the first step of each block, so the result at a
-          // depth depends only on the inputs since its block began.
-          const exact = i % TREND_ANCHOR_BLOCK === 0 || trendAt !== i - 1 || trendSeg !== k;
-          let dzOff = 0;
+          // Expand about the block's anchor depth; evaluate exactly at the first valid depth
+          // of each block, after a segment change, or where the expansion would reach too far.
+          // The decision depends only on the inputs since the block began.
+          const block = Math.floor(i / TREND_ANCHOR_BLOCK);
+          const t = z - anchorZ;
+          const exact = anchorBlock !== block || anchorSeg !== k || !(Math.abs(t) * seg.bAbsMax <= TAYLOR_REACH_MAX);
           if (exact) {
-            expState.stepDz = NaN;
+            fillEatonExponentialTrend(ppBuf, frBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState);
+            anchorBlock = block;
+            anchorSeg = k;
+            anchorZ = z;
           } else {
-            const dz = z - trendZ;
-            dzOff = dz - expState.stepDz;
-            if (!(Math.abs(dzOff) * seg.bAbsMax <= 1e-6)) {
-              for (let r = 0; r < R; r++) expState.step[r] = Math.exp(seg.b[r] * dz);
-              expState.stepDz = dz;
-              dzOff = 0;
-            }
-          }
-          if (exact) fillEatonExponentialTrend(ppBuf, frBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState);
-          else {
-            stepEatonExponentialFused(ppBuf, frBuf, R, seg.b, seg.dtMatrix, exponent, factor, kFrac, Math.log(obs), sv, ph, expState, dzOff, mudPsi, mom);
+            stepEatonExponentialFused(ppBuf, frBuf, R, exponent, factor, kFrac, Math.log(obs), sv, ph, expState, t, mudPsi, mom);
             fused = true;
           }
-          trendAt = i;
-          trendSeg = k;
-          trendZ = z;
         }
         else fillEatonLogLinearTrend(ppBuf, R, seg.a, seg.b, exponent, factor, z, isResistivity ? Math.log(obs) : -Math.log(obs), sv, ph);
       } else {
@@ -672,7 +658,7 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
         fillBowers(ppBuf, R, v, v0, lnA, invB, unload ? uArr : null, lnSigmaMax, factor, sv);
       }
       // Fracture pressure, moments (shifted sums about the first value) and exceedance counts
-      // (already taken by the fused stepped-trend kernel when it ran).
+      // (already taken by the fused exponential-trend kernel when it ran).
       if (!fused) fractureAndMoments(ppBuf, frBuf, R, factor, kFrac, sv, mudPsi, mom);
       const s1 = mom[0];
       const s2 = mom[1];
@@ -761,7 +747,7 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
  * between threads and put back together with {@link joinPressureUncertaintyParts}.
  *
  * Formula: as {@link simulatePressureUncertainty}. The range must start on a multiple of
- * {@link MONTE_CARLO_DEPTH_BLOCK} (64): the stepped trend state restarts there, so the part
+ * {@link MONTE_CARLO_DEPTH_BLOCK} (64): the trend expansion restarts there, so the part
  * repeats the whole-well values at its depths bit for bit.
  *
  * @param input.input the whole-well input, unchanged (all arrays full length)
