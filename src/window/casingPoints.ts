@@ -46,6 +46,8 @@ export interface CasingDesign {
  * @param args.upperPsiPerFt window upper bound, psi/ft
  * @param args.upperCriterion optional label of the upper bound per sample (e.g. `fracture`)
  * @param args.shoeSafetyMarginPpg extra margin below the upper bound, ppg, [0, 3], default 0
+ * @param args.firstIndex first sample to consider (default 0): the samples above it are
+ *   ignored, as if the arrays started there (e.g. above the structural casing)
  * @returns sections top-down, shoe depths and findings (`F_NO_MUD_WEIGHT` ranges)
  * @throws ShalepointError E_RANGE for a margin outside [0, 3]; E_LENGTH on mismatch;
  *   E_TOO_FEW when no sample has both bounds
@@ -61,6 +63,7 @@ export function selectCasingPoints(args: {
   upperPsiPerFt: ArrayLike<number>;
   upperCriterion?: readonly string[];
   shoeSafetyMarginPpg?: number;
+  firstIndex?: number;
 }): CasingDesign {
   const { tvdFt, lowerPsiPerFt: lower, upperPsiPerFt: upper, upperCriterion } = args;
   const marginPpg = args.shoeSafetyMarginPpg ?? 0;
@@ -70,14 +73,18 @@ export function selectCasingPoints(args: {
   const margin = marginPpg * PSI_PER_FT_PER_PPG;
   const tol = 1e-12; // absolute, psi/ft: equality within rounding counts as holding
   const has = (i: number): boolean => Number.isFinite(lower[i]) && Number.isFinite(upper[i]);
+  const top = args.firstIndex ?? 0;
+  if (!(Number.isInteger(top) && top >= 0)) {
+    throw new ShalepointError("E_RANGE", "firstIndex must be a sample index ≥ 0", { param: "firstIndex", value: top, allowed: "integer ≥ 0" });
+  }
   let b = tvdFt.length - 1;
-  while (b >= 0 && !has(b)) b--;
-  if (b < 0) {
+  while (b >= top && !has(b)) b--;
+  if (b < top) {
     throw new ShalepointError("E_TOO_FEW", "no sample has both window bounds", {
       param: "lowerPsiPerFt, upperPsiPerFt", allowed: "at least 1 sample with finite lower and upper bounds",
     });
   }
-  let first = 0;
+  let first = top;
   while (!has(first)) first++;
 
   const sectionsBottomUp: CasingSection[] = [];

@@ -1,6 +1,6 @@
 import { ShalepointError, requireRange, requireSameLength } from "../errors.js";
 import { PSI_PER_FT_PER_PPG } from "../units/index.js";
-import { type WindowFinding, windowFlagRuns } from "./windowFindings.js";
+import type { WindowFinding } from "./windowFindings.js";
 
 /** What sets the lower bound at a sample. */
 export type WindowLowerCriterion = "porePressure" | "collapse" | "missing";
@@ -49,7 +49,14 @@ export interface MudWeightWindow {
  *
  * Reference: common practice, no source (window bounds and margins).
  */
-export function mudWeightWindow(args: {
+export function mudWeightWindow(args: MudWeightWindowInput): MudWeightWindow {
+  const curves = mudWeightWindowCurves(args);
+  const findings = mudWeightWindowFindings({ ...args, curves });
+  return { ...curves, findings };
+}
+
+/** Inputs of {@link mudWeightWindow} (see there for units and ranges). */
+export interface MudWeightWindowInput {
   tvdFt: ArrayLike<number>;
   ppPsi: ArrayLike<number>;
   fracturePsi: ArrayLike<number>;
@@ -58,30 +65,41 @@ export function mudWeightWindow(args: {
   tripMarginPpg: number;
   kickMarginPpg: number;
   minWidthPpg?: number;
-}): MudWeightWindow {
+}
+
+function checkWindowInput(args: MudWeightWindowInput): void {
   const { tvdFt, ppPsi, fracturePsi, collapsePsi, breakdownPsi, tripMarginPpg, kickMarginPpg } = args;
-  const minWidthPpg = args.minWidthPpg ?? 0.5;
   requireRange(tripMarginPpg >= 0 && tripMarginPpg <= 3, "tripMarginPpg", tripMarginPpg, "[0, 3]", "ppg");
   requireRange(kickMarginPpg >= 0 && kickMarginPpg <= 3, "kickMarginPpg", kickMarginPpg, "[0, 3]", "ppg");
-  requireRange(minWidthPpg >= 0, "minWidthPpg", minWidthPpg, ">= 0", "ppg");
+  requireRange((args.minWidthPpg ?? 0.5) >= 0, "minWidthPpg", args.minWidthPpg ?? 0.5, ">= 0", "ppg");
   requireSameLength(tvdFt, ppPsi, "tvdFt", "ppPsi");
   requireSameLength(tvdFt, fracturePsi, "tvdFt", "fracturePsi");
   if (collapsePsi) requireSameLength(tvdFt, collapsePsi, "tvdFt", "collapsePsi");
   if (breakdownPsi) requireSameLength(tvdFt, breakdownPsi, "tvdFt", "breakdownPsi");
+}
+
+/**
+ * The window's per-sample part: bounds, width and criteria, each sample on its own (so a
+ * run on the deeper part of a well gives the same values there as a run on the whole well).
+ * Same formulas and checks as {@link mudWeightWindow}, without the findings.
+ *
+ * @param args as {@link mudWeightWindow}
+ * @returns bounds (psi/ft EMW), width (psi/ft) and criteria per sample
+ * @throws ShalepointError E_RANGE for a margin outside [0, 3] ppg; E_LENGTH on mismatch
+ * @example mudWeightWindowCurves({ tvdFt: [10000], ppPsi: [5195], fracturePsi: [7792], tripMarginPpg: 0.3, kickMarginPpg: 0.5 }).widthPsiPerFt[0] // ≈ 0.2181
+ */
+export function mudWeightWindowCurves(args: MudWeightWindowInput): Omit<MudWeightWindow, "findings"> {
+  checkWindowInput(args);
+  const { tvdFt, ppPsi, fracturePsi, collapsePsi, breakdownPsi, tripMarginPpg, kickMarginPpg } = args;
   // ppg → psi/ft once, here.
   const trip = tripMarginPpg * PSI_PER_FT_PER_PPG;
   const kick = kickMarginPpg * PSI_PER_FT_PER_PPG;
-  const minWidth = minWidthPpg * PSI_PER_FT_PER_PPG;
-
   const n = tvdFt.length;
   const lowerPsiPerFt = new Float64Array(n);
   const upperPsiPerFt = new Float64Array(n);
   const widthPsiPerFt = new Float64Array(n);
   const lowerCriterion: WindowLowerCriterion[] = new Array(n);
   const upperCriterion: WindowUpperCriterion[] = new Array(n);
-  let withData = 0;
-  let inverted = 0;
-  let widestRaw = -Infinity;
   for (let i = 0; i < n; i++) {
     const d = tvdFt[i];
     let lo = ppPsi[i];
@@ -109,11 +127,66 @@ export function mudWeightWindow(args: {
     widthPsiPerFt[i] = upperPsiPerFt[i] - lowerPsiPerFt[i];
     lowerCriterion[i] = loC;
     upperCriterion[i] = hiC;
-    withData++;
-    if (widthPsiPerFt[i] < 0) inverted++;
-    widestRaw = Math.max(widestRaw, (hi - lo) / d);
+  }
+  return { lowerPsiPerFt, upperPsiPerFt, widthPsiPerFt, lowerCriterion, upperCriterion };
+}
+
+/**
+ * The window's whole-well part: the depth ranges where it closes or inverts, and the check
+ * that it is not inverted everywhere. One pass over the width, no per-sample arrays.
+ *
+ * @param args as {@link mudWeightWindow}, plus `curves` from {@link mudWeightWindowCurves}
+ *   on the same (whole) arrays
+ * @returns findings sorted by top depth
+ * @throws ShalepointError E_WINDOW_CLOSED_EVERYWHERE when the window is inverted at every
+ *   sample with data (names the margins and the widest window before margins)
+ * @example mudWeightWindowFindings({ tvdFt: [10000], ppPsi: [5195], fracturePsi: [7792], tripMarginPpg: 0.3, kickMarginPpg: 0.5,
+ *   curves: mudWeightWindowCurves({ tvdFt: [10000], ppPsi: [5195], fracturePsi: [7792], tripMarginPpg: 0.3, kickMarginPpg: 0.5 }) }) // []
+ */
+export function mudWeightWindowFindings(args: MudWeightWindowInput & { curves: Pick<MudWeightWindow, "widthPsiPerFt" | "lowerCriterion"> }): WindowFinding[] {
+  const { tvdFt, tripMarginPpg, kickMarginPpg } = args;
+  const minWidthPpg = args.minWidthPpg ?? 0.5;
+  const minWidth = minWidthPpg * PSI_PER_FT_PER_PPG;
+  const width = args.curves.widthPsiPerFt;
+  const criterion = args.curves.lowerCriterion;
+  const n = width.length;
+  const narrowRuns: Array<{ first: number; last: number; extreme: number }> = [];
+  const invertedRuns: Array<{ first: number; last: number; extreme: number }> = [];
+  let withData = 0;
+  let inverted = 0;
+  // Runs of narrow (0 ≤ w < minWidth) and of inverted (w < 0) samples, with the least
+  // width in each run; a missing sample (NaN) ends a run.
+  let kind = 0; // 0 none, 1 narrow, 2 inverted
+  let first = 0;
+  let extreme = Infinity;
+  for (let i = 0; i <= n; i++) {
+    const w = i < n ? width[i] : NaN;
+    if (i < n && criterion[i] !== "missing") {
+      withData++;
+      if (w < 0) inverted++;
+    }
+    const k = w >= 0 && w < minWidth ? 1 : w < 0 ? 2 : 0;
+    if (k !== kind) {
+      if (kind !== 0) (kind === 1 ? narrowRuns : invertedRuns).push({ first, last: i - 1, extreme });
+      kind = k;
+      first = i;
+      extreme = Infinity;
+    }
+    if (k !== 0 && w < extreme) extreme = w;
   }
   if (withData > 0 && inverted === withData) {
+    // The widest window before margins, for the message (a rare path: one more pass).
+    const { ppPsi, fracturePsi, collapsePsi, breakdownPsi } = args;
+    let widestRaw = -Infinity;
+    for (let i = 0; i < n; i++) {
+      const d = tvdFt[i];
+      if (!(d > 0) || Number.isNaN(ppPsi[i]) || Number.isNaN(fracturePsi[i])) continue;
+      const c = collapsePsi ? collapsePsi[i] : NaN;
+      const b = breakdownPsi ? breakdownPsi[i] : NaN;
+      const lo = c > ppPsi[i] ? c : ppPsi[i];
+      const hi = b < fracturePsi[i] ? b : fracturePsi[i];
+      widestRaw = Math.max(widestRaw, (hi - lo) / d);
+    }
     throw new ShalepointError("E_WINDOW_CLOSED_EVERYWHERE", "the mud-weight window is inverted at every depth", {
       param: "tripMarginPpg + kickMarginPpg",
       value: tripMarginPpg + kickMarginPpg,
@@ -124,31 +197,20 @@ export function mudWeightWindow(args: {
   }
   const findings: WindowFinding[] = [];
   const toPpg = (g: number): string => (g / PSI_PER_FT_PER_PPG).toFixed(2);
-  const narrow = new Uint8Array(n);
-  const inv = new Uint8Array(n);
-  for (let i = 0; i < n; i++) {
-    const w = widthPsiPerFt[i];
-    if (w >= 0 && w < minWidth) narrow[i] = 1;
-    else if (w < 0) inv[i] = 1;
-  }
-  for (const { first, last } of windowFlagRuns(narrow)) {
-    let least = Infinity;
-    for (let i = first; i <= last; i++) least = Math.min(least, widthPsiPerFt[i]);
+  for (const { first: a, last: b, extreme: least } of narrowRuns) {
     findings.push({
       code: "F_WINDOW_CLOSES",
-      message: `window narrower than ${minWidthPpg} ppg from ${tvdFt[first]} to ${tvdFt[last]} ft (narrowest ${toPpg(least)} ppg)`,
-      topFt: tvdFt[first], baseFt: tvdFt[last], count: last - first + 1,
+      message: `window narrower than ${minWidthPpg} ppg from ${tvdFt[a]} to ${tvdFt[b]} ft (narrowest ${toPpg(least)} ppg)`,
+      topFt: tvdFt[a], baseFt: tvdFt[b], count: b - a + 1,
     });
   }
-  for (const { first, last } of windowFlagRuns(inv)) {
-    let worst = Infinity;
-    for (let i = first; i <= last; i++) worst = Math.min(worst, widthPsiPerFt[i]);
+  for (const { first: a, last: b, extreme: worst } of invertedRuns) {
     findings.push({
       code: "F_WINDOW_INVERTS",
-      message: `window inverted (lower above upper) from ${tvdFt[first]} to ${tvdFt[last]} ft (worst ${toPpg(worst)} ppg)`,
-      topFt: tvdFt[first], baseFt: tvdFt[last], count: last - first + 1,
+      message: `window inverted (lower above upper) from ${tvdFt[a]} to ${tvdFt[b]} ft (worst ${toPpg(worst)} ppg)`,
+      topFt: tvdFt[a], baseFt: tvdFt[b], count: b - a + 1,
     });
   }
   findings.sort((a, b) => a.topFt - b.topFt);
-  return { lowerPsiPerFt, upperPsiPerFt, widthPsiPerFt, lowerCriterion, upperCriterion, findings };
+  return findings;
 }

@@ -45,6 +45,15 @@ describe("selectCasingPoints", () => {
     expect(r.shoeTvdFt).toEqual([]);
     expect(r.sections[0].topTvdFt).toBe(0);
   });
+  it("firstIndex ignores the samples above it, exactly as if the arrays started there (hand case from 2000 ft)", () => {
+    const from = 2;
+    const whole = selectCasingPoints({ tvdFt, lowerPsiPerFt, upperPsiPerFt, upperCriterion, firstIndex: from });
+    const cut = selectCasingPoints({ tvdFt: tvdFt.slice(from), lowerPsiPerFt: lowerPsiPerFt.slice(from), upperPsiPerFt: upperPsiPerFt.slice(from), upperCriterion: upperCriterion.slice(from) });
+    expect(whole).toEqual(cut);
+    // By hand as above: the 4000 and 8000 ft shoes stand; the top section starts at 2000 ft.
+    expect(whole.shoeTvdFt).toEqual([4000, 8000]);
+    expect(whole.sections[0].topTvdFt).toBe(2000);
+  });
   it("bad input: margin out of range, no data", () => {
     const code = (fn: () => unknown) => { try { fn(); } catch (e) { return (e as ShalepointError).code; } return undefined; };
     expect(code(() => selectCasingPoints({ tvdFt, lowerPsiPerFt, upperPsiPerFt, shoeSafetyMarginPpg: -1 }))).toBe("E_RANGE");

@@ -4,7 +4,7 @@
  * (CHECK-VALUES §0).
  */
 import { describe, expect, it } from "vitest";
-import { mudWeightWindow } from "../../src/window/mudWeightWindow.js";
+import { mudWeightWindow, mudWeightWindowCurves } from "../../src/window/mudWeightWindow.js";
 import { errorOf as errOf } from "../helpers/shalepointErrors.js";
 
 const K = 12 / 231; // psi/ft per ppg, exact (CHECK-VALUES §0)
@@ -22,6 +22,21 @@ describe("mudWeightWindow", () => {
     expect(r.lowerCriterion).toEqual(["porePressure"]);
     expect(r.upperCriterion).toEqual(["fracture"]);
     expect(r.findings).toEqual([]);
+  });
+  it("mudWeightWindowCurves is per sample: the deeper part alone gives the whole well's values there (bit for bit)", () => {
+    const tvdFt = [1000, 2000, 3000, 4000, 5000];
+    const args = {
+      tvdFt, ppPsi: [9, 9.5, 12, NaN, 13].map((p, i) => p * K * tvdFt[i]), fracturePsi: [14, 14, 12.8, 12.4, 12.5].map((p, i) => p * K * tvdFt[i]),
+      collapsePsi: [NaN, 10 * K * 2000, NaN, NaN, 14 * K * 5000], tripMarginPpg: 0.3, kickMarginPpg: 0.3,
+    };
+    const whole = mudWeightWindow(args);
+    const tail = mudWeightWindowCurves({ ...args, tvdFt: tvdFt.slice(2), ppPsi: args.ppPsi.slice(2), fracturePsi: args.fracturePsi.slice(2), collapsePsi: args.collapsePsi.slice(2) });
+    expect(Array.from(tail.widthPsiPerFt)).toEqual(Array.from(whole.widthPsiPerFt.subarray(2)));
+    expect(Array.from(tail.lowerPsiPerFt)).toEqual(Array.from(whole.lowerPsiPerFt.subarray(2)));
+    expect(tail.lowerCriterion).toEqual(whole.lowerCriterion.slice(2));
+    expect(tail.upperCriterion).toEqual(["fracture", "missing", "fracture"]);
+    // 12 ppg pore, 12.8 ppg fracture at 3000 ft with 0.3 + 0.3 ppg margins: 0.2 ppg wide (own case)
+    expect(tail.widthPsiPerFt[0] / K).toBeCloseTo(0.2, 10);
   });
   it("collapse raises the lower bound and breakdown lowers the upper bound where they bind", () => {
     const tvdFt = [1000, 2000, 3000];
