@@ -69,14 +69,55 @@ export function stressConsistencyFindings(args: {
   if (shminPsi !== undefined) requireStressCurves(tvdFt, ppPsi, shminPsi);
   const minRun = Math.max(2, Math.floor(args.minRunSamples ?? 5));
   const findings: StressFinding[] = [];
+  // The least principal stress at a sample: min(Sv, Shmin) (Sv without Shmin).
+  const least = (i: number): number => (shminPsi === undefined ? svPsi[i] : Math.min(svPsi[i], shminPsi[i]));
 
-  const least = new Float64Array(n);
-  for (let i = 0; i < n; i++) least[i] = shminPsi === undefined ? svPsi[i] : Math.min(svPsi[i], shminPsi[i]);
+  // One pass for checks 1 and 3 (they run on every while-drilling update, over the whole
+  // well): runs of Pp ≥ least stress, and runs of least stress − Pp falling with depth (the
+  // margin wiggles sample to sample, so most of those runs are short and dropped at once).
+  const atLeastRuns: number[] = []; // [first, last] pairs
+  const convergingRuns: number[] = []; // [sample above the first member, last] pairs
+  let badStart = -1;
+  let fallStart = -1;
+  let dPrev = NaN;
+  for (let i = 0; i <= n; i++) {
+    let l = NaN;
+    let p = NaN;
+    if (i < n) {
+      const sv = svPsi[i];
+      l = shminPsi === undefined ? sv : Math.min(sv, shminPsi[i]);
+      p = ppPsi[i];
+    }
+    if (i < n && p >= l) {
+      if (badStart < 0) badStart = i;
+    } else if (badStart >= 0) {
+      atLeastRuns.push(badStart, i - 1);
+      badStart = -1;
+    }
+    if (i === 0) {
+      dPrev = l - p;
+      continue;
+    }
+    let on = false;
+    if (i < n) {
+      const d1 = l - p;
+      on = d1 < dPrev;
+      dPrev = d1;
+    }
+    if (on) {
+      if (fallStart < 0) fallStart = i;
+      continue;
+    }
+    if (fallStart < 0) continue;
+    const start = fallStart - 1; // the run compares with the sample above its first member
+    fallStart = -1;
+    if (i - 1 - start + 1 >= minRun) convergingRuns.push(start, i - 1);
+  }
 
   // 1. Pp at or above the least principal stress: contiguous runs.
-  const bad = new Uint8Array(n);
-  for (let i = 0; i < n; i++) bad[i] = ppPsi[i] >= least[i] ? 1 : 0;
-  for (const [a, b] of runsOf(bad)) {
+  for (let r = 0; r < atLeastRuns.length; r += 2) {
+    const a = atLeastRuns[r];
+    const b = atLeastRuns[r + 1];
     findings.push({
       code: "F_PP_AT_LEAST_STRESS",
       message: `pore pressure at or above the least principal stress from ${tvdFt[a]} to ${tvdFt[b]} ft: the rock would fracture; review pore pressure, overburden and Shmin`,
@@ -116,29 +157,12 @@ export function stressConsistencyFindings(args: {
     }
   });
 
-  // 3. Convergence: least stress − Pp falling with depth.
-  // Runs of falling margin are walked in place (the margin wiggles sample to sample, so
-  // most runs are short: no array of runs is built for them).
-  let a = -1;
-  let dPrev = n > 0 ? least[0] - ppPsi[0] : NaN;
-  for (let i = 1; i <= n; i++) {
-    let on = false;
-    if (i < n) {
-      const d1 = least[i] - ppPsi[i];
-      on = d1 < dPrev;
-      dPrev = d1;
-    }
-    if (on) {
-      if (a < 0) a = i;
-      continue;
-    }
-    if (a < 0) continue;
-    const b = i - 1;
-    const start = a - 1; // the run compares with the sample above its first member
-    a = -1;
-    if (b - start + 1 < minRun) continue;
-    const m0 = least[start] - ppPsi[start];
-    const m1 = least[b] - ppPsi[b];
+  // 3. Convergence: least stress − Pp falling with depth over at least minRun samples.
+  for (let r = 0; r < convergingRuns.length; r += 2) {
+    const start = convergingRuns[r];
+    const b = convergingRuns[r + 1];
+    const m0 = least(start) - ppPsi[start];
+    const m1 = least(b) - ppPsi[b];
     findings.push({
       code: "F_STRESSES_CONVERGE_ON_PP",
       message: `least stress minus pore pressure falls from ${m0.toFixed(0)} to ${m1.toFixed(0)} psi between ${tvdFt[start]} and ${tvdFt[b]} ft: the window narrows with depth`,
@@ -148,19 +172,4 @@ export function stressConsistencyFindings(args: {
     });
   }
   return findings;
-}
-
-/** Index ranges [a, b] of consecutive 1s. */
-function runsOf(flags: Uint8Array): Array<[number, number]> {
-  const runs: Array<[number, number]> = [];
-  let a = -1;
-  for (let i = 0; i <= flags.length; i++) {
-    const on = i < flags.length && flags[i] === 1;
-    if (on && a < 0) a = i;
-    if (!on && a >= 0) {
-      runs.push([a, i - 1]);
-      a = -1;
-    }
-  }
-  return runs;
 }
