@@ -46,6 +46,7 @@ import { bowersPorePressure, velocityAtDepth } from "../porepressure/bowersPoreP
 import { equivalentDepthPorePressure } from "../porepressure/equivalentDepth.js";
 import { velocityFromSlownessLog } from "../porepressure/velocityFromSlowness.js";
 import { flagWarnings, splicedFlagWarnings, type PorePressureResult } from "../porepressure/porePressureFlags.js";
+import { extendInRoom as extend, supersededStateError, type GrowthRoom, type SampleArray } from "./growthRoom.js";
 import {
   predictPorePressure,
   type PorePressurePrediction,
@@ -64,52 +65,15 @@ export interface IncrementalPorePressureState {
   prediction: PorePressurePrediction;
   /** Compensated running sum of the overburden integral (sum and compensation), psi. */
   overburdenRun: { anchorIndex: number; sumPsi: Float64Array; compPsi: Float64Array };
-  /** First sample index the last update recomputed (0 for a fresh start). */
+  /**
+   * First sample index the last update recomputed (0 for a fresh start): every curve of the
+   * prediction is unchanged above it, so a later step (the stress window) may restart there.
+   */
   recomputedFromIndex: number;
   /** Storage with room to grow, shared with the states before and after this one. */
   room: GrowthRoom;
 }
 
-/**
- * The buffers a chain of while-drilling states grows into. Every per-sample array of a
- * state is a view of length n on a buffer allocated here with room for more samples, so an
- * update writes only the samples it recomputes instead of copying the whole well; a buffer
- * is re-allocated (1.5 times the samples) only when it is full. `length` is the sample
- * count of the latest state: only that state may be extended.
- */
-export interface GrowthRoom {
-  /** Samples of the latest state; NaN after an update that failed part-way. */
-  length: number;
-  /** Buffers allocated for this chain (never a caller's buffer). */
-  buffers: WeakSet<ArrayBufferLike>;
-}
-
-type SampleArray = Float64Array | Uint8Array | Int32Array;
-
-/**
- * A view of length n on `a`'s buffer when that buffer is the room's and long enough (no
- * copy: samples below a.length are a's), otherwise a copy of a into a new room buffer with
- * room for 50 % more samples. Samples from a.length on are for the caller to write.
- */
-function extend<T extends SampleArray>(room: GrowthRoom, a: T, n: number): T {
-  const Ctor = a.constructor as { new (buffer: ArrayBufferLike, byteOffset: number, length: number): T; BYTES_PER_ELEMENT: number };
-  if (room.buffers.has(a.buffer) && a.byteOffset === 0 && a.buffer.byteLength >= n * Ctor.BYTES_PER_ELEMENT) {
-    return new Ctor(a.buffer, 0, n);
-  }
-  const capacity = n + Math.max(4096, n >> 1);
-  const buffer = new ArrayBuffer(capacity * Ctor.BYTES_PER_ELEMENT);
-  room.buffers.add(buffer);
-  const out = new Ctor(buffer, 0, n);
-  out.set(a.length > n ? a.subarray(0, n) : a);
-  return out;
-}
-
-function superseded(): ShalepointError {
-  return new ShalepointError("E_STATE_SUPERSEDED", "this while-drilling state was already extended (or an update of it failed part-way)", {
-    param: "state",
-    hint: "Pass the state returned by the last appendDepthSamples call, or call startWhileDrilling again on the well so far.",
-  });
-}
 
 /** New depth samples below the current end of the well, in internal units. */
 export interface DepthSampleChunk {
@@ -193,7 +157,7 @@ export function startWhileDrilling(well: Well, options: PorePressurePredictionOp
  * @example const before = copyWhileDrillingState(state); state = appendDepthSamples(state, chunk);
  */
 export function copyWhileDrillingState(state: IncrementalPorePressureState): IncrementalPorePressureState {
-  if (state.room.length !== state.prediction.tvdFt.length) throw superseded();
+  if (state.room.latest !== state) throw supersededStateError();
   return ownedState(state.well, state.options, state.prediction, state.recomputedFromIndex, state.overburdenRun);
 }
 
@@ -205,7 +169,7 @@ function ownedState(
   recomputedFromIndex: number,
   run = overburdenRunFrom(p.overburden, p.tvdFt),
 ): IncrementalPorePressureState {
-  const room: GrowthRoom = { length: p.tvdFt.length, buffers: new WeakSet() };
+  const room: GrowthRoom = { latest: null, buffers: new WeakSet() };
   const r = <T extends SampleArray>(a: T): T => extend(room, a, a.length);
   const ro = <T extends SampleArray>(a: T | undefined): T | undefined => (a === undefined ? undefined : r(a));
   const own = (a: ArrayLike<number>): Float64Array => r(a instanceof Float64Array ? a : Float64Array.from(a));
@@ -241,7 +205,9 @@ function ownedState(
     ppPsi: (methods[p.primary] as { ppPsi: Float64Array }).ppPsi,
   };
   const overburdenRun = { anchorIndex: run.anchorIndex, sumPsi: r(run.sumPsi), compPsi: r(run.compPsi) };
-  return { well: ownWell, options, prediction, overburdenRun, recomputedFromIndex, room };
+  const state: IncrementalPorePressureState = { well: ownWell, options, prediction, overburdenRun, recomputedFromIndex, room };
+  room.latest = state;
+  return state;
 }
 
 /**
@@ -532,11 +498,15 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   const old = state.prediction;
   const nOld = old.tvdFt.length;
   const room = state.room;
-  if (room.length !== nOld) throw superseded();
+  if (room.latest !== state) throw supersededStateError();
   checkChunk(state.well, chunk);
-  if (chunk.tvdFt.length === 0) return { ...state, recomputedFromIndex: nOld };
+  if (chunk.tvdFt.length === 0) {
+    const same = { ...state, recomputedFromIndex: nOld };
+    room.latest = same;
+    return same;
+  }
   // From here on the shared buffers are written: a failure part-way leaves the chain unusable.
-  room.length = NaN;
+  room.latest = null;
   const well = appendWell(room, state.well, chunk);
   const n = well.tvdFt.length;
   const despike = options.despike ?? true;
@@ -593,6 +563,8 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
   const resistivity = updateTrend(room, old.resistivityTrend, options.resistivityTrend, shale, shale.points.values.res, mudline, bmlFt, nOld, cutKeyDepthFt - mudline);
 
   const methods: PorePressurePrediction["methods"] = {};
+  // The shallowest sample any curve was recomputed from (reported as recomputedFromIndex).
+  let lowest = Math.min(from, sonic.from, resistivity.from);
   const sub = (a: Float64Array, f: number): Float64Array => a.subarray(f);
   // Eaton from the first sample its shale line or trend changed, spliced after the old result.
   const eatonFrom = (log: "sonic" | "resistivity", line: Float64Array, trend: Float64Array, f: number, oldResult: PorePressureResult | undefined, exponent: number) => {
@@ -616,6 +588,7 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
       unloading = { ...unloading, vmaxFtPerS: velocityAtOnset(tvdFt, shaleLine.dtUsPerFt, unloading.onsetTvdFt) };
     }
     const f = old.methods.bowers && unloading?.vmaxFtPerS === old.methods.bowers.vmaxFtPerS ? from : old.methods.bowers && !unloading ? from : 0;
+    lowest = Math.min(lowest, f);
     const velocity = velocityFromSlownessLog(sub(shaleLine.dtUsPerFt, f));
     const tail = bowersPorePressure({ overburdenPsi: sub(ob.result.svPsi, f), hydrostaticPsi: sub(hydrostaticPsi, f), velocityFtPerS: velocity, tvdFt: sub(tvdFt, f), a, b, v0FtPerS, unloading });
     const r = spliceResult(room, old.methods.bowers, tail, f, n, tvdFt, "Bowers");
@@ -634,6 +607,7 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     // the old well's last depth (the bracket search returns the last sample at or above Ze).
     const reuse = oldEd !== undefined && f > 0 && f < nOld && tvdFt[f - 1] < tvdFt[nOld - 1];
     const start = reuse ? f : 0;
+    lowest = Math.min(lowest, start);
     // Samples from `start` on, computed with the whole well as the search context.
     const ed = equivalentDepthPorePressure({
       overburdenPsi: ob.result.svPsi,
@@ -675,8 +649,9 @@ export function appendDepthSamples(state: IncrementalPorePressureState, chunk: D
     calibration: {},
     warnings,
   };
-  room.length = n;
-  return { well, options, prediction, overburdenRun: ob.run, recomputedFromIndex: Math.min(from, sonic.from, resistivity.from), room };
+  const next: IncrementalPorePressureState = { well, options, prediction, overburdenRun: ob.run, recomputedFromIndex: lowest, room };
+  room.latest = next;
+  return next;
 }
 
 function updateOverburden(

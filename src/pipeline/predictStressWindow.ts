@@ -20,7 +20,7 @@ import { stressConsistencyFindings, type StressFinding } from "../stress/stressC
 import { breakoutMudPressure } from "../stress/breakoutLimits.js";
 import { breakdownPressureNonPenetrating } from "../stress/breakdownPressure.js";
 import { ucsFromSlownessHorsrud2001 } from "../stress/ucsCorrelations.js";
-import { mudWeightWindow, type MudWeightWindow } from "../window/mudWeightWindow.js";
+import { mudWeightWindowCurves, mudWeightWindowFindings, type MudWeightWindow } from "../window/mudWeightWindow.js";
 import { selectCasingPoints, type CasingDesign } from "../window/casingPoints.js";
 import { checkCasingPlan, type PlannedHoleSection, type CasingPlanViolation } from "../window/casingPlanCheck.js";
 
@@ -125,6 +125,10 @@ function fractureFrom(
  * Predict minimum stress, stress bounds, wellbore limits, the mud-weight window and casing
  * points from pore pressure and overburden.
  *
+ * Three steps, each reusable by the while-drilling update: {@link chooseFractureMethod}
+ * (calibration to the stress tests), {@link stressWindowCurves} (every per-sample curve)
+ * and {@link stressWindowSummaries} (findings and casing points over the whole well).
+ *
  * @param input.tvdFt TVD below RT, ft, non-decreasing
  * @param input.ppPsi pore pressure, psi (e.g. PorePressurePrediction.ppPsi)
  * @param input.svPsi overburden, psi
@@ -133,17 +137,42 @@ function fractureFrom(
  * @throws every error of the stage modules (typed ShalepointError)
  * @example predictStressWindow({ tvdFt, ppPsi, svPsi }, { fracture: { method: "eaton1969", poissonRatio: 0.42 } }).window
  */
-export function predictStressWindow(
-  input: { tvdFt: ArrayLike<number>; ppPsi: ArrayLike<number>; svPsi: ArrayLike<number> },
-  options: StressWindowOptions,
-): StressWindowPrediction {
-  const warnings: Warning[] = [];
-  const { tvdFt, ppPsi, svPsi } = input;
-  const n = tvdFt.length;
-  const stress = { tvdFt, ppPsi, svPsi };
+export function predictStressWindow(input: StressInputs, options: StressWindowOptions): StressWindowPrediction {
+  const chosen = chooseFractureMethod(input, options);
+  const curves = stressWindowCurves(input, chosen.fracture, options);
+  const summaries = stressWindowSummaries(input, curves, options);
+  return assembleStressWindow(curves, chosen, summaries);
+}
 
+/** Depth, pore pressure and overburden on one index (ft, psi, psi). */
+export interface StressInputs {
+  tvdFt: ArrayLike<number>;
+  ppPsi: ArrayLike<number>;
+  svPsi: ArrayLike<number>;
+}
+
+/** The fracture method to use after calibration, with the calibration and its warnings. */
+export interface ChosenFractureMethod {
+  fracture: FractureMethodChoice;
+  fractureCalibration?: FractureCalibration;
+  warnings: Warning[];
+}
+
+/**
+ * Step 1 of {@link predictStressWindow}: calibrate the fracture model to the stress tests
+ * (when there are tests) and, with `calibrateFracture`, replace the given coefficient by the
+ * fitted one. Reads the well only at the tests' depths.
+ *
+ * @param stress depth (ft), pore pressure and overburden (psi) on one index
+ * @param options the stress-window options (fracture, stressTests, calibrateFracture)
+ * @returns {@link ChosenFractureMethod}
+ * @throws every error of calibrateFractureModel
+ * @example chooseFractureMethod({ tvdFt, ppPsi, svPsi }, { fracture: { method: "eaton1969", poissonRatio: 0.42 } }).fracture
+ */
+export function chooseFractureMethod(stress: StressInputs, options: StressWindowOptions): ChosenFractureMethod {
   let fracture = options.fracture;
   let fractureCalibration: FractureCalibration | undefined;
+  const warnings: Warning[] = [];
   const tests = options.stressTests ?? [];
   if (tests.length > 0) {
     const given = fracture;
@@ -165,23 +194,42 @@ export function predictStressWindow(
       }
     }
   }
+  return { fracture, fractureCalibration, warnings };
+}
+
+/** Every per-sample curve of the stress window (see {@link StressWindowPrediction}). */
+export interface StressWindowCurves {
+  shminPsi: Float64Array;
+  fractureGradientPsiPerFt: Float64Array;
+  hubbertWillis: { minPsi: Float64Array; maxPsi: Float64Array };
+  bounds: FrictionalStressBounds;
+  wellbore?: { shmaxPsi: Float64Array; ucsPsi: Float64Array; collapsePsi: Float64Array; breakdownPsi: Float64Array };
+  window: Omit<MudWeightWindow, "findings">;
+}
+
+/**
+ * Step 2 of {@link predictStressWindow}: minimum stress, fracture gradient, Hubbert &
+ * Willis bounds, frictional bounds, wellbore limits and the window's bounds. Each sample is
+ * computed from its own inputs only, so the curves of the deeper part of a well are the same
+ * whether computed alone or with the whole well.
+ *
+ * @param stress depth (ft), pore pressure and overburden (psi) on one index
+ * @param fracture the method chosen by {@link chooseFractureMethod}
+ * @param options the stress-window options (frictionCoefficient, wellbore, margins)
+ * @returns {@link StressWindowCurves}
+ * @throws every error of the stage modules (a ν or UCS curve must have one value per sample)
+ * @example stressWindowCurves({ tvdFt, ppPsi, svPsi }, { method: "eaton1969", poissonRatio: 0.42 }, options).shminPsi
+ */
+export function stressWindowCurves(stress: StressInputs, fracture: FractureMethodChoice, options: StressWindowOptions): StressWindowCurves {
+  const { tvdFt, ppPsi, svPsi } = stress;
+  const n = tvdFt.length;
   const shminPsi = fractureFrom(fracture, stress);
   const fractureGradientPsiPerFt = new Float64Array(n);
   for (let i = 0; i < n; i++) fractureGradientPsiPerFt[i] = tvdFt[i] > 0 ? shminPsi[i] / tvdFt[i] : NaN;
   const hw = hubbertWillisFractureBounds(stress);
+  const bounds = frictionalStressBounds({ ...stress, frictionCoefficient: options.frictionCoefficient ?? 0.6 });
 
-  const mu = options.frictionCoefficient ?? 0.6;
-  const bounds = frictionalStressBounds({ ...stress, frictionCoefficient: mu });
-  const findings = stressConsistencyFindings({
-    ...stress,
-    shminPsi,
-    measuredShmin: tests.filter((t) => t.kind === "XLOT" || t.kind === "minifrac").map((t) => ({ tvdFt: t.tvdFt, shminPsi: t.pressurePsi, label: t.label })),
-    frictionCoefficient: mu,
-    // Convergence is a trend over hundreds of feet, not a sample-to-sample wiggle.
-    minRunSamples: Math.max(5, Math.round(CONVERGENCE_MIN_RUN_FT / medianStepFt(tvdFt))),
-  });
-
-  let wellbore: StressWindowPrediction["wellbore"];
+  let wellbore: StressWindowCurves["wellbore"];
   if (options.wellbore) {
     const wb = options.wellbore;
     const f = wb.shmaxFraction ?? 0;
@@ -192,17 +240,60 @@ export function predictStressWindow(
     const breakdownPsi = breakdownPressureNonPenetrating({ shminPsi, shmaxPsi, ppPsi, tensileStrengthPsi: wb.tensileStrengthPsi ?? 0 });
     wellbore = { shmaxPsi, ucsPsi, collapsePsi, breakdownPsi };
   }
+  const window = mudWeightWindowCurves({ ...windowMargins(options), tvdFt, ppPsi, fracturePsi: shminPsi, collapsePsi: wellbore?.collapsePsi, breakdownPsi: wellbore?.breakdownPsi });
+  return { shminPsi, fractureGradientPsiPerFt, hubbertWillis: { minPsi: hw.min.shminPsi, maxPsi: hw.max.shminPsi }, bounds, wellbore, window };
+}
 
+function windowMargins(options: StressWindowOptions): { tripMarginPpg: number; kickMarginPpg: number; minWidthPpg?: number } {
   const m = options.margins ?? {};
-  const window = mudWeightWindow({
+  return { tripMarginPpg: m.tripPpg ?? 0.3, kickMarginPpg: m.kickPpg ?? 0.3, minWidthPpg: m.minWindowPpg };
+}
+
+/** The whole-well results of {@link stressWindowSummaries}. */
+export interface StressWindowSummaries {
+  findings: StressFinding[];
+  windowFindings: MudWeightWindow["findings"];
+  casing?: CasingDesign;
+  casingPlanViolations?: CasingPlanViolation[];
+  warnings: Warning[];
+}
+
+/**
+ * Step 3 of {@link predictStressWindow}: what needs the whole well — stress consistency
+ * findings, window findings, bottom-up casing points and the casing-plan check.
+ *
+ * @param stress depth (ft), pore pressure and overburden (psi) of the whole well
+ * @param curves {@link stressWindowCurves} of the whole well
+ * @param options the stress-window options (stressTests, frictionCoefficient, margins, firstShoeTvdFt, casingPlan)
+ * @returns {@link StressWindowSummaries}
+ * @throws every error of the stage modules (e.g. E_WINDOW_CLOSED_EVERYWHERE)
+ * @example stressWindowSummaries(stress, stressWindowCurves(stress, options.fracture, options), options).casing
+ */
+export function stressWindowSummaries(stress: StressInputs, curves: StressWindowCurves, options: StressWindowOptions): StressWindowSummaries {
+  const { tvdFt, ppPsi, svPsi } = stress;
+  const n = tvdFt.length;
+  const warnings: Warning[] = [];
+  const tests = options.stressTests ?? [];
+  const { shminPsi, window, wellbore } = curves;
+  const mu = options.frictionCoefficient ?? 0.6;
+  const findings = stressConsistencyFindings({
+    tvdFt,
+    ppPsi,
+    svPsi,
+    shminPsi,
+    measuredShmin: tests.filter((t) => t.kind === "XLOT" || t.kind === "minifrac").map((t) => ({ tvdFt: t.tvdFt, shminPsi: t.pressurePsi, label: t.label })),
+    frictionCoefficient: mu,
+    // Convergence is a trend over hundreds of feet, not a sample-to-sample wiggle.
+    minRunSamples: Math.max(5, Math.round(CONVERGENCE_MIN_RUN_FT / medianStepFt(tvdFt))),
+  });
+  const windowFindings = mudWeightWindowFindings({
+    ...windowMargins(options),
     tvdFt,
     ppPsi,
     fracturePsi: shminPsi,
     collapsePsi: wellbore?.collapsePsi,
     breakdownPsi: wellbore?.breakdownPsi,
-    tripMarginPpg: m.tripPpg ?? 0.3,
-    kickMarginPpg: m.kickPpg ?? 0.3,
-    minWidthPpg: m.minWindowPpg,
+    curves: window,
   });
 
   let casing: CasingDesign | undefined;
@@ -212,14 +303,13 @@ export function predictStressWindow(
     let first = 0;
     const firstShoe = options.firstShoeTvdFt ?? -Infinity;
     while (first < n && tvdFt[first] < firstShoe) first++;
-    const sub = <T extends { subarray(a: number): T }>(a: T): T => a.subarray(first);
     casing = selectCasingPoints({
-      // A Float64Array index is viewed, not copied (selectCasingPoints does not write to it).
-      tvdFt: sub(tvdFt instanceof Float64Array ? tvdFt : Float64Array.from(tvdFt)),
-      lowerPsiPerFt: sub(window.lowerPsiPerFt),
-      upperPsiPerFt: sub(window.upperPsiPerFt),
-      upperCriterion: window.upperCriterion.slice(first),
-      shoeSafetyMarginPpg: m.shoeSafetyPpg ?? 0.2,
+      tvdFt,
+      lowerPsiPerFt: window.lowerPsiPerFt,
+      upperPsiPerFt: window.upperPsiPerFt,
+      upperCriterion: window.upperCriterion,
+      shoeSafetyMarginPpg: options.margins?.shoeSafetyPpg ?? 0.2,
+      firstIndex: first,
     });
   } catch (e) {
     warnings.push({ code: "W_NO_CASING_DESIGN", message: `casing points not selected: ${(e as Error).message}` });
@@ -227,18 +317,29 @@ export function predictStressWindow(
   const casingPlanViolations = options.casingPlan
     ? checkCasingPlan({ tvdFt, lowerPsiPerFt: window.lowerPsiPerFt, upperPsiPerFt: window.upperPsiPerFt, sections: options.casingPlan })
     : undefined;
+  return { findings, windowFindings, casing, casingPlanViolations, warnings };
+}
 
+/**
+ * The prediction from the three steps' results (warnings: calibration, then summaries).
+ * @param curves step 2
+ * @param chosen step 1
+ * @param summaries step 3
+ * @returns {@link StressWindowPrediction}
+ * @example assembleStressWindow(curves, chosen, summaries).window.findings
+ */
+export function assembleStressWindow(curves: StressWindowCurves, chosen: ChosenFractureMethod, summaries: StressWindowSummaries): StressWindowPrediction {
   return {
-    shminPsi,
-    fractureGradientPsiPerFt,
-    hubbertWillis: { minPsi: hw.min.shminPsi, maxPsi: hw.max.shminPsi },
-    fractureCalibration,
-    bounds,
-    findings,
-    wellbore,
-    window,
-    casing,
-    casingPlanViolations,
-    warnings,
+    shminPsi: curves.shminPsi,
+    fractureGradientPsiPerFt: curves.fractureGradientPsiPerFt,
+    hubbertWillis: curves.hubbertWillis,
+    fractureCalibration: chosen.fractureCalibration,
+    bounds: curves.bounds,
+    findings: summaries.findings,
+    wellbore: curves.wellbore,
+    window: { ...curves.window, findings: summaries.windowFindings },
+    casing: summaries.casing,
+    casingPlanViolations: summaries.casingPlanViolations,
+    warnings: [...chosen.warnings, ...summaries.warnings],
   };
 }
