@@ -240,6 +240,19 @@ async function benchSize(n) {
       state = sp.appendDepthSamples(state, chunkList[next++]);
       return state;
     }, { warmup, runs, minMs: 0 }));
+    // All curves: the pore-pressure update, then the stress window (minimum stress with its
+    // leak-off calibration, bounds, wellbore limits, mud-weight window, findings, casing
+    // points) refreshed from the samples the update recomputed.
+    const inputOf = (p) => ({ tvdFt: p.tvdFt, ppPsi: p.ppPsi, svPsi: p.overburden.svPsi, dtUsPerFt: p.shaleLine.dtUsPerFt });
+    let pp = sp.startWhileDrilling(head, options);
+    let win = sp.startStressWindowWhileDrilling(inputOf(pp.prediction), { ...STRESS_OPTIONS, stressTests: stressTests().filter((t) => t.tvdFt < head.tvdFt[n - 1]) });
+    next = 0;
+    record("append 500 samples + refresh pore pressure and stress window", n, await measure(() => {
+      if (next >= chunks) throw new Error("append benchmark ran out of chunks");
+      pp = sp.appendDepthSamples(pp, chunkList[next++]);
+      win = sp.refreshStressWindow(win, inputOf(pp.prediction), pp.recomputedFromIndex);
+      return win;
+    }, { warmup, runs, minMs: 0 }));
   }
   if (want("segment") && typeof sp.segmentPressureProfile === "function") {
     record("segmentation (segmentPressureProfile)", n, await measure(() => sp.segmentPressureProfile({ tvdFt, ppPsi: base.ppPsi, hydrostaticPsi: base.hydrostaticPsi }), { runs: 7, warmup: 1 }));
