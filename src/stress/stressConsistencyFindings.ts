@@ -77,42 +77,34 @@ export function stressConsistencyFindings(args: {
   // margin wiggles sample to sample, so most of those runs are short and dropped at once).
   const atLeastRuns: number[] = []; // [first, last] pairs
   const convergingRuns: number[] = []; // [sample above the first member, last] pairs
+  // min(Sv, Sv) = Sv, so Sv stands in for a missing Shmin.
+  const sh = shminPsi ?? svPsi;
   let badStart = -1;
   let fallStart = -1;
   let dPrev = NaN;
-  for (let i = 0; i <= n; i++) {
-    let l = NaN;
-    let p = NaN;
-    if (i < n) {
-      const sv = svPsi[i];
-      l = shminPsi === undefined ? sv : Math.min(sv, shminPsi[i]);
-      p = ppPsi[i];
-    }
-    if (i < n && p >= l) {
+  for (let i = 0; i < n; i++) {
+    const l = Math.min(svPsi[i], sh[i]);
+    const p = ppPsi[i];
+    if (p >= l) {
       if (badStart < 0) badStart = i;
     } else if (badStart >= 0) {
       atLeastRuns.push(badStart, i - 1);
       badStart = -1;
     }
-    if (i === 0) {
-      dPrev = l - p;
-      continue;
+    const d = l - p;
+    if (i > 0) {
+      if (d < dPrev) {
+        if (fallStart < 0) fallStart = i;
+      } else if (fallStart >= 0) {
+        // the run compares with the sample above its first member
+        if (i - fallStart + 1 >= minRun) convergingRuns.push(fallStart - 1, i - 1);
+        fallStart = -1;
+      }
     }
-    let on = false;
-    if (i < n) {
-      const d1 = l - p;
-      on = d1 < dPrev;
-      dPrev = d1;
-    }
-    if (on) {
-      if (fallStart < 0) fallStart = i;
-      continue;
-    }
-    if (fallStart < 0) continue;
-    const start = fallStart - 1; // the run compares with the sample above its first member
-    fallStart = -1;
-    if (i - 1 - start + 1 >= minRun) convergingRuns.push(start, i - 1);
+    dPrev = d;
   }
+  if (badStart >= 0) atLeastRuns.push(badStart, n - 1);
+  if (fallStart >= 0 && n - fallStart + 1 >= minRun) convergingRuns.push(fallStart - 1, n - 1);
 
   // 1. Pp at or above the least principal stress: contiguous runs.
   for (let r = 0; r < atLeastRuns.length; r += 2) {

@@ -159,21 +159,25 @@ export function mudWeightWindowFindings(args: MudWeightWindowInput & { curves: P
   let kind = 0; // 0 none, 1 narrow, 2 inverted
   let first = 0;
   let extreme = Infinity;
-  for (let i = 0; i <= n; i++) {
-    const w = i < n ? width[i] : NaN;
-    if (i < n && criterion[i] !== "missing") {
+  const close = (last: number): void => {
+    (kind === 1 ? narrowRuns : invertedRuns).push({ first, last, extreme });
+  };
+  for (let i = 0; i < n; i++) {
+    const w = width[i];
+    if (criterion[i] !== "missing") {
       withData++;
       if (w < 0) inverted++;
     }
     const k = w >= 0 && w < minWidth ? 1 : w < 0 ? 2 : 0;
     if (k !== kind) {
-      if (kind !== 0) (kind === 1 ? narrowRuns : invertedRuns).push({ first, last: i - 1, extreme });
+      if (kind !== 0) close(i - 1);
       kind = k;
       first = i;
       extreme = Infinity;
     }
     if (k !== 0 && w < extreme) extreme = w;
   }
+  if (kind !== 0) close(n - 1);
   if (withData > 0 && inverted === withData) {
     // The widest window before margins, for the message (a rare path: one more pass).
     const { ppPsi, fracturePsi, collapsePsi, breakdownPsi } = args;
