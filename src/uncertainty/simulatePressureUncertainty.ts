@@ -24,9 +24,12 @@
  *
  * Statistics: P10/P50/P90 are the 10th/50th/90th percentiles of the realisations, so P10 is
  * the LOW value and P90 the HIGH value (the usual convention of this trade), by the type-7
- * definition of Hyndman & Fan 1996 (The American Statistician 50(4):361–365), read off a
- * permutation carried from the previous depth and re-sorted by insertion (see
- * createCarriedOrderQuantiles in carriedOrderQuantiles.ts) — exact, usually one pass per depth.
+ * definition of Hyndman & Fan 1996 (The American Statistician 50(4):361–365): pore pressure
+ * from a partition carried from the previous depth, with sorted windows around the three
+ * ranks (createPartitionedOrderQuantiles in partitionedOrderQuantiles.ts), fracture pressure
+ * from a permutation carried from the previous depth and re-sorted by insertion
+ * (createCarriedOrderQuantiles in carriedOrderQuantiles.ts) — both exact, usually one pass
+ * per depth.
  *
  * Loop order: all realisation parameters are drawn once (Float64Arrays of length R); then,
  * depth by depth, R pore pressures and R fracture pressures go into two scratch buffers
