@@ -99,7 +99,9 @@ export function createPartitionedOrderQuantiles(input: { count: number; probabil
   const zoneLo = new Float64Array(zones);
   const zoneHi = new Float64Array(zones);
   const gapCount = new Int32Array(m + 1);
-  const win = Array.from({ length: m }, () => new Int32Array(n));
+  // Window lists start with room for their ranks plus intruders and grow when needed (a
+  // window can take up to n entries before a rebuild), so a huge n costs no 3·n scratch.
+  const win = Array.from({ length: m }, (_, q) => new Int32Array(Math.min(n, 4 * (wantHi[q] - wantLo[q]))));
   const winLen = new Int32Array(m);
   const winStart = new Int32Array(m); // rank of each window's first entry
   const lo = new Float64Array(m);
@@ -183,6 +185,11 @@ export function createPartitionedOrderQuantiles(input: { count: number; probabil
       if ((t & 1) === 0) gapCount[t >> 1]++;
       else {
         const q = t >> 1;
+        if (winLen[q] === win[q].length) {
+          const grown = new Int32Array(Math.min(n, 2 * win[q].length));
+          grown.set(win[q]);
+          win[q] = grown;
+        }
         const w = win[q];
         // Insert in the sorted window (ties go after equal values).
         let s = winLen[q] - 1;
