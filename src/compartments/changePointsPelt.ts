@@ -4,6 +4,7 @@
  * Pure: typed arrays in, a plain result object out. No imports beyond `errors`.
  */
 import { ShalepointError, type Warning } from "../errors.js";
+import { medianInPlace } from "../trend/medianInPlace.js";
 
 /**
  * Segment cost used by {@link findChangePointsPelt}.
@@ -110,53 +111,11 @@ function differenceNoiseSigma(y: Float64Array): number {
   if (n < 3) return 0;
   const d = new Float64Array(n - 1);
   for (let i = 0; i < n - 1; i++) d[i] = y[i + 1] - y[i];
-  const med = medianInPlaceForCompartments(d.slice());
+  const med = medianInPlace(d.slice());
   for (let i = 0; i < d.length; i++) d[i] = Math.abs(d[i] - med);
-  return (1.4826 * medianInPlaceForCompartments(d)) / Math.SQRT2;
+  return (1.4826 * medianInPlace(d)) / Math.SQRT2;
 }
 
-/**
- * Median of a NaN-free array by iterative selection (Hoare's FIND, Communications of the
- * ACM 4(7):321–322, 1961), O(n) on average. Reorders `a` (pass a copy to keep the input).
- * @param a values, any unit; must not contain NaN
- * @returns the median (mean of the two middle values for an even count); NaN when empty
- * @example medianInPlaceForCompartments(Float64Array.from([3, 1, 2, 10])) // → 2.5
- */
-export function medianInPlaceForCompartments(a: Float64Array): number {
-  if (a.length === 0) return NaN;
-  const n = a.length;
-  const select = (k: number): number => {
-    let lo = 0;
-    let hi = n - 1;
-    while (lo < hi) {
-      const pivot = a[(lo + hi) >> 1];
-      let i = lo;
-      let j = hi;
-      while (i <= j) {
-        while (a[i] < pivot) i++;
-        while (a[j] > pivot) j--;
-        if (i <= j) {
-          const tmp = a[i];
-          a[i] = a[j];
-          a[j] = tmp;
-          i++;
-          j--;
-        }
-      }
-      if (k <= j) hi = j;
-      else if (k >= i) lo = i;
-      else return a[k];
-    }
-    return a[k];
-  };
-  const m = n >> 1;
-  if (n % 2 === 1) return select(m);
-  const upper = select(m);
-  // After selecting m, every element left of m is ≤ a[m]: the lower middle is their maximum.
-  let lower = -Infinity;
-  for (let i = 0; i < m; i++) if (a[i] > lower) lower = a[i];
-  return 0.5 * (lower + upper);
-}
 
 /**
  * Pruned Exact Linear Time change-point search (PELT).

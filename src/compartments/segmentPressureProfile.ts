@@ -4,7 +4,8 @@
  * Pure: typed arrays in, plain objects out.
  */
 import { ShalepointError, requireSameLength, type Warning } from "../errors.js";
-import { findChangePointsPelt, medianInPlaceForCompartments, type ChangePointCost } from "./changePointsPelt.js";
+import { findChangePointsPelt, type ChangePointCost } from "./changePointsPelt.js";
+import { medianInPlace } from "../trend/medianInPlace.js";
 
 /** Grid size above which the automatic candidate step exceeds 1. */
 const AUTO_GRID_POINTS = 2000;
@@ -258,7 +259,7 @@ export function segmentPressureProfile(input: SegmentPressureProfileInput): Segm
   // Median step of the used samples.
   const steps = new Float64Array(Math.max(used.length - 1, 0));
   for (let k = 1; k < used.length; k++) steps[k - 1] = tvdFt[used[k]] - tvdFt[used[k - 1]];
-  const stepFt = medianInPlaceForCompartments(steps);
+  const stepFt = medianInPlace(steps);
   const minLen = cost === "linear" ? 3 : 1;
   const minSeg = stepFt > 0 ? Math.max(minLen, Math.round(minThicknessFt / stepFt) + 1) : minLen;
   if (used.length < minSeg) {

@@ -14,6 +14,7 @@
  * least-squares ones at the final weights (an approximation; no sandwich correction).
  */
 import { fitStraightLine, type StraightLineFit } from "./fitStraightLine.js";
+import { medianInPlace } from "./medianInPlace.js";
 
 /** Huber tuning constant giving ≈ 95 % efficiency under normal errors. */
 export const HUBER_TUNING_CONSTANT = 1.345;
@@ -31,43 +32,10 @@ export interface HuberLineFit extends StraightLineFit {
   converged: boolean;
 }
 
-/**
- * Median of finite values, by selection in `scratch` (overwritten; length ≥ values.length):
- * the same order statistics as a full sort, found in linear expected time (Hoare 1961,
- * "Algorithm 65: Find", Communications of the ACM 4(7):321–322).
- */
+/** Median of finite values, found by selection in `scratch` (overwritten; same length). */
 function median(values: Float64Array, scratch: Float64Array): number {
-  const n = values.length;
-  const a = scratch;
-  a.set(values);
-  const m = n >> 1;
-  // Partition until a[m] holds the m-th smallest, with a[0..m−1] ≤ a[m] ≤ a[m+1..n−1].
-  let lo = 0;
-  let hi = n - 1;
-  while (lo < hi) {
-    const pivot = a[(lo + hi) >> 1];
-    let i = lo;
-    let j = hi;
-    while (i <= j) {
-      while (a[i] < pivot) i++;
-      while (a[j] > pivot) j--;
-      if (i <= j) {
-        const t = a[i];
-        a[i] = a[j];
-        a[j] = t;
-        i++;
-        j--;
-      }
-    }
-    if (m <= j) hi = j;
-    else if (m >= i) lo = i;
-    else break;
-  }
-  if (n % 2) return a[m];
-  // The (m−1)-th smallest is the largest value left of m.
-  let below = a[0];
-  for (let k = 1; k < m; k++) if (a[k] > below) below = a[k];
-  return 0.5 * (below + a[m]);
+  scratch.set(values);
+  return medianInPlace(scratch);
 }
 
 /**

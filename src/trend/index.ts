@@ -4,5 +4,6 @@ export * from "./sonicLogLinearTrend.js";
 export * from "./resistivityLogLinearTrend.js";
 export * from "./fitStraightLine.js";
 export * from "./fitStraightLineHuber.js";
+export * from "./medianInPlace.js";
 export * from "./fitCompactionTrend.js";
 export * from "./evaluateCompactionTrend.js";

@@ -6,7 +6,7 @@
  * direct two-pass segment costs instead of prefix sums.
  */
 import { describe, expect, it } from "vitest";
-import { findChangePointsPelt, medianInPlaceForCompartments, type ChangePointCost } from "../../src/compartments/index.js";
+import { findChangePointsPelt, type ChangePointCost } from "../../src/compartments/index.js";
 import { ShalepointError } from "../../src/errors.js";
 import { seededUniform } from "../helpers/seededRandom.js";
 
@@ -214,19 +214,3 @@ describe("findChangePointsPelt — missing data and bad input", () => {
   });
 });
 
-describe("medianInPlaceForCompartments", () => {
-  it("doc example: [3, 1, 2, 10] → 2.5 (definition of the median, common practice, no source)", () => {
-    expect(medianInPlaceForCompartments(Float64Array.from([3, 1, 2, 10]))).toBe(2.5);
-  });
-  it("equals the sorted-array median on seeded random arrays with ties, odd and even lengths", () => {
-    const r = rng(99);
-    for (let rep = 0; rep < 50; rep++) {
-      const n = 1 + Math.floor(r() * 40);
-      const a = Float64Array.from({ length: n }, () => Math.round(r() * 10));
-      const s = Array.from(a).sort((u, v) => u - v);
-      const expected = n % 2 ? s[(n - 1) / 2] : 0.5 * (s[n / 2 - 1] + s[n / 2]);
-      expect(medianInPlaceForCompartments(a.slice())).toBe(expected);
-    }
-    expect(Number.isNaN(medianInPlaceForCompartments(new Float64Array(0)))).toBe(true);
-  });
-});
