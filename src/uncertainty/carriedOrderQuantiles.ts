@@ -67,7 +67,7 @@ export function createCarriedOrderQuantiles(input: { count: number; probabilitie
   let nFull = 0;
 
   const quantiles = (x: Float64Array, out: Float64Array, off: number): void => {
-    if (!started || !insertionSortCarried(order, x, n, cap)) {
+    if (!started || !insertionSortIndexRange(order, x, 0, n, cap)) {
       order.sort((a, b) => x[a] - x[b]);
       started = true;
       nFull++;
@@ -84,13 +84,24 @@ export function createCarriedOrderQuantiles(input: { count: number; probabilitie
 }
 
 /**
- * Straight insertion of idx[0..n−1] by key[idx[·]], starting from the given order; gives up
- * (returns false, idx still a permutation) once more than `cap` moves were needed.
+ * Straight insertion of idx[from..to−1] by key[idx[·]], starting from the given order (Knuth
+ * 1998, TAOCP vol. 3, §5.2.1): cheap when the order is nearly right, as it is from one depth
+ * to the next. Gives up (returns false, idx still a permutation) once more than `cap` moves
+ * were needed, so the caller can sort afresh instead.
+ *
+ * @param idx indices into key, reordered in place over [from, to)
+ * @param key the values that order the indices (no NaN)
+ * @param from first position, ≥ 0
+ * @param to one past the last position, ≤ idx.length
+ * @param cap most element moves allowed, ≥ 0
+ * @returns true when idx[from..to−1] is sorted by key
+ * @example const idx = Int32Array.of(0, 1, 2); insertionSortIndexRange(idx, Float64Array.of(3, 1, 2), 0, 3, 10); // true, idx [1, 2, 0]
  */
-function insertionSortCarried(idx: Int32Array, key: Float64Array, n: number, cap: number): boolean {
+export function insertionSortIndexRange(idx: Int32Array, key: Float64Array, from: number, to: number, cap: number): boolean {
+  if (to - from < 2) return true;
   let moves = 0;
-  let prev = key[idx[0]];
-  for (let k = 1; k < n; k++) {
+  let prev = key[idx[from]];
+  for (let k = from + 1; k < to; k++) {
     const id = idx[k];
     const v = key[id];
     if (v >= prev) {
@@ -102,7 +113,7 @@ function insertionSortCarried(idx: Int32Array, key: Float64Array, n: number, cap
     do {
       idx[s + 1] = idx[s];
       s--;
-    } while (s >= 0 && key[idx[s]] > v);
+    } while (s >= from && key[idx[s]] > v);
     idx[s + 1] = id;
     moves += k - 1 - s;
     if (moves > cap) return false;

@@ -36,7 +36,7 @@
  * Imports: siblings only (quantilesType7.ts for the request check, carriedOrderQuantiles.ts).
  */
 import { checkQuantileRequest } from "./quantilesType7.js";
-import { createCarriedOrderQuantiles } from "./carriedOrderQuantiles.js";
+import { createCarriedOrderQuantiles, insertionSortIndexRange } from "./carriedOrderQuantiles.js";
 
 /** Quantile reader returned by {@link createPartitionedOrderQuantiles}. */
 export interface PartitionedOrderQuantiles {
@@ -115,7 +115,7 @@ export function createPartitionedOrderQuantiles(input: { count: number; probabil
 
   /** Sort every index by x and cut the zones at the wanted ranks. */
   const rebuild = (x: Float64Array): void => {
-    if (!built || !insertionSortIndices(order, x, 0, n, cap)) order.sort((a, b) => x[a] - x[b]);
+    if (!built || !insertionSortIndexRange(order, x, 0, n, cap)) order.sort((a, b) => x[a] - x[b]);
     let k = 0;
     for (let q = 0; q < m; q++) {
       gapCount[q] = wantLo[q] - k;
@@ -140,7 +140,7 @@ export function createPartitionedOrderQuantiles(input: { count: number; probabil
     // 1. Re-sort the windows and take their value ranges.
     for (let q = 0; q < m; q++) {
       const w = win[q];
-      insertionSortIndices(w, x, 0, winLen[q], Infinity);
+      insertionSortIndexRange(w, x, 0, winLen[q], Infinity);
       lo[q] = x[w[0]];
       hi[q] = x[w[winLen[q] - 1]];
       if (q > 0 && !(hi[q - 1] < lo[q])) return false;
@@ -240,31 +240,4 @@ export function createPartitionedOrderQuantiles(input: { count: number; probabil
     }
   };
   return { quantiles, fullSorts: () => nFull };
-}
-
-/**
- * Straight insertion of idx[from..to−1] by key[idx[·]], starting from the given order; gives
- * up (returns false, idx still a permutation) once more than `cap` moves were needed.
- */
-function insertionSortIndices(idx: Int32Array, key: Float64Array, from: number, to: number, cap: number): boolean {
-  if (to - from < 2) return true;
-  let moves = 0;
-  let prev = key[idx[from]];
-  for (let k = from + 1; k < to; k++) {
-    const id = idx[k];
-    const v = key[id];
-    if (v >= prev) {
-      prev = v;
-      continue;
-    }
-    let s = k - 1;
-    do {
-      idx[s + 1] = idx[s];
-      s--;
-    } while (s >= from && key[idx[s]] > v);
-    idx[s + 1] = id;
-    moves += k - 1 - s;
-    if (moves > cap) return false;
-  }
-  return true;
 }

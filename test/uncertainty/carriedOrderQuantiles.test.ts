@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { quantileSeq } from "mathjs";
-import { createCarriedOrderQuantiles, createXoshiro128Random } from "../../src/uncertainty/index.js";
+import { createCarriedOrderQuantiles, createXoshiro128Random, insertionSortIndexRange } from "../../src/uncertainty/index.js";
 
 /** Reference: full sort, then h = (n−1)p, Q = x(j) + (h−j)(x(j+1) − x(j)). */
 function plainSortType7(values: ArrayLike<number>, p: number): number {
@@ -80,5 +80,18 @@ describe("createCarriedOrderQuantiles", () => {
     expect(() => createCarriedOrderQuantiles({ count: 0, probabilities: [0.5] })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
     expect(() => createCarriedOrderQuantiles({ count: 10, probabilities: [0.9, 0.1] })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
     expect(() => createCarriedOrderQuantiles({ count: 10, probabilities: [10] })).toThrow(expect.objectContaining({ code: "E_RANGE" }));
+  });
+});
+
+describe("insertionSortIndexRange", () => {
+  it("sorts only idx[from..to−1] by key, leaves the rest, and gives up past the move cap (own case, counted by hand)", () => {
+    const key = Float64Array.of(5, 4, 3, 2, 1, 0);
+    const idx = Int32Array.of(0, 1, 2, 3, 4, 5);
+    // Positions 1..4 hold keys 4, 3, 2, 1: reversed, 6 moves by straight insertion.
+    expect(insertionSortIndexRange(idx, key, 1, 5, 6)).toBe(true);
+    expect(Array.from(idx)).toEqual([0, 4, 3, 2, 1, 5]);
+    const again = Int32Array.of(0, 1, 2, 3, 4, 5);
+    expect(insertionSortIndexRange(again, key, 1, 5, 5)).toBe(false);
+    expect(Array.from(again).sort()).toEqual([0, 1, 2, 3, 4, 5]); // still a permutation
   });
 });
