@@ -4,16 +4,9 @@
  * mathjs quantileSeq (an independent library using the same interpolation).
  */
 import { describe, expect, it } from "vitest";
+import { plainSortType7 } from "../helpers/plainSortType7.js";
 import { quantileSeq } from "mathjs";
 import { createPartitionedOrderQuantiles, createXoshiro128Random } from "../../src/uncertainty/index.js";
-
-/** Reference: full sort, then h = (n−1)p, Q = x(j) + (h−j)(x(j+1) − x(j)). */
-function plainSortType7(values: ArrayLike<number>, p: number): number {
-  const x = Array.from(values).sort((a, b) => a - b);
-  const h = (x.length - 1) * p;
-  const j = Math.floor(h);
-  return j + 1 < x.length ? x[j] + (h - j) * (x[j + 1] - x[j]) : x[j];
-}
 
 describe("createPartitionedOrderQuantiles", () => {
   it("doc example [4, 1, 3, 2] → 1.3, 2.5, 3.7, as mathjs quantileSeq", () => {

@@ -4,16 +4,9 @@
  * (an independent library using the same interpolation).
  */
 import { describe, expect, it } from "vitest";
+import { plainSortType7 } from "../helpers/plainSortType7.js";
 import { quantileSeq } from "mathjs";
 import { quantilesType7, quantilesType7InPlace, createQuantileTracker, createXoshiro128Random } from "../../src/uncertainty/index.js";
-
-/** Reference: full sort, then h = (n−1)p, Q = x(j) + (h−j)(x(j+1) − x(j)). */
-function plainSortType7(values: number[], p: number): number {
-  const x = [...values].sort((a, b) => a - b);
-  const h = (x.length - 1) * p;
-  const j = Math.floor(h);
-  return j + 1 < x.length ? x[j] + (h - j) * (x[j + 1] - x[j]) : x[j];
-}
 
 const P = [0, 0.1, 0.25, 0.5, 0.9, 1];
 
