@@ -74,7 +74,6 @@ export interface IncrementalPorePressureState {
   room: GrowthRoom;
 }
 
-
 /** New depth samples below the current end of the well, in internal units. */
 export interface DepthSampleChunk {
   /** MD below RT, ft, increasing and deeper than the well's last sample. */
