@@ -10,10 +10,10 @@ import { createXoshiro128Random, expByTable, expByTableInto } from "../../src/un
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
 describe("expByTable", () => {
-  it("stays within 4e-16 (relative) of Math.exp on 10^6 seeded points in [−20, 20]", () => {
-    // Source: Math.exp (library, fdlibm: error < 1 ulp). Bound: ours ≤ 1.13e-16 (file comment)
-    // plus Math.exp's < 1 ulp (≤ 2.22e-16) = 3.35e-16 < 4e-16; a 1 % change in any polynomial
-    // coefficient moves results near |r| = 2.7e-3 by ≥ 1e-12 and fails here.
+  it("stays within 5e-16 (relative) of Math.exp on 10^6 seeded points in [−20, 20]", () => {
+    // Source: Math.exp (library, fdlibm: error < 1 ulp). Bound: ours ≤ 2.6e-16 (file comment)
+    // plus Math.exp's < 1 ulp (≤ 2.22e-16) = 4.8e-16 < 5e-16; a 1 % change in any polynomial
+    // coefficient moves results near |r| = 1.35e-3 by ≥ 1.4e-15 and fails here.
     const rnd = createXoshiro128Random(2024);
     let worst = 0;
     let worstNarrow = 0;
@@ -24,8 +24,8 @@ describe("expByTable", () => {
       const y = -3 + 6 * rnd.nextFloat();
       worstNarrow = Math.max(worstNarrow, rel(expByTable(y), Math.exp(y)));
     }
-    expect(worst).toBeLessThan(4e-16);
-    expect(worstNarrow).toBeLessThan(4e-16);
+    expect(worst).toBeLessThan(5e-16);
+    expect(worstNarrow).toBeLessThan(5e-16);
   });
 
   it("gives e, 1/e and e^10 to the nearest double or next to it", () => {
@@ -42,8 +42,8 @@ describe("expByTable", () => {
     for (const x of [700, -700, 709.7, -745, 800, -800, Infinity, -Infinity]) expect(expByTable(x)).toBe(Math.exp(x));
     expect(expByTable(NaN)).toBeNaN();
     // Just inside the table range the result is still within the bound.
-    expect(rel(expByTable(699.9), Math.exp(699.9))).toBeLessThan(4e-16);
-    expect(rel(expByTable(-699.9), Math.exp(-699.9))).toBeLessThan(4e-16);
+    expect(rel(expByTable(699.9), Math.exp(699.9))).toBeLessThan(5e-16);
+    expect(rel(expByTable(-699.9), Math.exp(-699.9))).toBeLessThan(5e-16);
   });
 });
 
