@@ -36,9 +36,8 @@
  * where the statistics are taken. Memory is O(R + depths); no R × depths matrix exists.
  * For log-linear trends ln(ratio) = a'_r + b'_r·Z − ln(obs) is linear in depth, so each
  * sample costs one exp (ratio^n = exp(n·ln ratio), by the table exponential of
- * tableExponential.ts for the exponential-to-matrix trend, Math.exp otherwise); Bowers costs
- * one exp per sample (ln(V − V0) once per depth). The exponential-to-matrix sonic trend
- * ln(Δtm + e^(a_r + b_r·Z)) is evaluated directly at the first depth of every block of 64
+ * tableExponential.ts); Bowers costs one exp per sample (ln(V − V0) once per depth). The
+ * exponential-to-matrix sonic trend ln(Δtm + e^(a_r + b_r·Z)) is evaluated directly at the first depth of every block of 64
  * depth indices, with its degree-5 Taylor coefficients in Z, and the other depths of the
  * block use that polynomial (remainder < 6.5e-17 while |b_r|·|Z − Z₀| ≤ 6e-3, else the depth
  * becomes a new anchor), so a sample again costs one exp, with no log or division and no
@@ -195,19 +194,14 @@ function requireFiniteScalar(ok: boolean, param: string, value: unknown, allowed
   if (!ok) throw new ShalepointError("E_RANGE", `${param} is out of range`, { param, value, allowed, unit });
 }
 
-// ---- per-depth kernels (small functions so the engine optimises each on its own) ----------
+// ---- per-depth passes ---------------------------------------------------------------------
+// Each pass is one short loop in a function of its own. The exponential is the table-driven
+// one of tableExponential.ts: with the benchmark well's Eaton exponents (near −1) Math.exp took
+// about twice as long per value, its reduction branch flipping from realisation to realisation.
 
-/** Eaton with a log-linear trend: ln ratio = a_r + b_r·Z + c0 (signs folded in a, b, c0). */
-function fillEatonLogLinearTrend(
-  out: Float64Array, R: number, a: Float64Array, b: Float64Array, n: Float64Array, f: Float64Array,
-  z: number, c0: number, sv: number, ph: number,
-): void {
-  for (let r = 0; r < R; r++) {
-    const lnRatio = a[r] + b[r] * z + c0;
-    const svr = sv * f[r];
-    const pp = svr - (svr - ph) * Math.exp(n[r] * lnRatio);
-    out[r] = pp > svr ? svr : pp; // clipped at overburden, as porepressure/ does
-  }
+/** Eaton exponent with a log-linear trend: x_r = n_r·(a_r + b_r·Z + c), signs folded in a, b, c. */
+function exponentLogLinear(x: Float64Array, R: number, n: Float64Array, a: Float64Array, b: Float64Array, z: number, c: number): void {
+  for (let r = 0; r < R; r++) x[r] = n[r] * (a[r] + b[r] * z + c);
 }
 
 /**
@@ -240,17 +234,17 @@ interface ExponentialTrendState {
 }
 
 /**
- * Eaton with the exponential-to-matrix sonic trend at an anchor depth (the first of a
- * 64-depth block, or after a segment change or a long reach): ln ratio = ln(Δtm + e^(a_r + b_r·Z)) − ln Δt
- * with E = e^(a_r + b_r·Z) and ln(Δtm + E) evaluated directly; it also stores the Taylor
- * coefficients about this depth used by the depths that follow ({@link stepEatonExponentialFused}).
- * With w = E/(Δtm + E) and v = w(1 − w), the derivatives of ln(Δtm + e^(a + bZ)) are
- * b·w, b²·v, b³·v(1 − 2w), b⁴·v(1 − 6w + 6w²), b⁵·v(1 − 2w)(1 − 12w + 12w²) (from dw/dZ = b·v);
- * c_k is the k-th derivative over k!.
+ * Eaton exponent with the exponential-to-matrix sonic trend at an anchor depth (the first of
+ * a 64-depth block, or after a segment change or a long reach):
+ * x_r = n_r·(ln(Δtm + E) − ln Δt), E = e^(a_r + b_r·Z), with ln(Δtm + E) evaluated directly;
+ * it also stores the Taylor coefficients about this depth used by the depths that follow
+ * ({@link exponentFromExpansion}). With w = E/(Δtm + E) and v = w(1 − w), the derivatives of
+ * ln(Δtm + e^(a + bZ)) are b·w, b²·v, b³·v(1 − 2w), b⁴·v(1 − 6w + 6w²),
+ * b⁵·v(1 − 2w)(1 − 12w + 12w²) (from dw/dZ = b·v); c_k is the k-th derivative over k!.
  */
-function fillEatonExponentialTrend(
-  out: Float64Array, scratch: Float64Array, R: number, a: Float64Array, b: Float64Array, dtMatrix: number, n: Float64Array,
-  f: Float64Array, z: number, lnObs: number, sv: number, ph: number, st: ExponentialTrendState,
+function exponentAtAnchor(
+  x: Float64Array, R: number, n: Float64Array, a: Float64Array, b: Float64Array, dtMatrix: number,
+  z: number, lnObs: number, st: ExponentialTrendState,
 ): void {
   const { c0, c1, c2, c3, c4, c5 } = st;
   for (let r = 0; r < R; r++) {
@@ -266,79 +260,35 @@ function fillEatonExponentialTrend(
     c3[r] = (b2 * br * v * (1 - 2 * w)) / 6;
     c4[r] = (b2 * b2 * v * (1 - 6 * w + 6 * w * w)) / 24;
     c5[r] = (b2 * b2 * br * v * (1 - 2 * w) * (1 - 12 * w + 12 * w * w)) / 120;
-    scratch[r] = n[r] * (l - lnObs);
-  }
-  // ratio^n by the same table exponential as the other depths (tableExponential.ts).
-  expByTableInto({ x: scratch, out, count: R });
-  for (let r = 0; r < R; r++) {
-    const svr = sv * f[r];
-    const pp = svr - (svr - ph) * out[r];
-    out[r] = pp > svr ? svr : pp;
+    x[r] = n[r] * (l - lnObs);
   }
 }
 
 /**
- * One depth of the exponential-to-matrix trend after the anchor of its block, fused with the
- * fracture pressure, the moments and the exceedance counts; mom gets [s1, s2, shift, nBelow,
- * nAbove]. The trend is the degree-5 Taylor expansion about the anchor,
- * ln(Δtm + E) = c0 + t(c1 + t(c2 + t(c3 + t(c4 + t·c5)))), t = Z − Z₀ (|b|·|t| ≤ 6e-3, remainder
- * < 6.5e-17), so no log and no division per sample, and no state carried from depth to depth.
- * The fracture and moments arithmetic is that of fractureAndMoments, operation for operation
- * and in the same realisation order.
+ * Eaton exponent with the exponential-to-matrix trend after the anchor of its block, from the
+ * degree-5 Taylor expansion about the anchor:
+ * x_r = n_r·(c0 + t(c1 + t(c2 + t(c3 + t(c4 + t·c5)))) − ln Δt), t = Z − Z₀ (|b|·|t| ≤ 6e-3,
+ * remainder < 6.5e-17), so no log and no division per sample, and no state carried from
+ * depth to depth.
  */
-function stepEatonExponentialFused(
-  pp: Float64Array, fr: Float64Array, R: number, n: Float64Array, f: Float64Array,
-  kF: Float64Array, lnObs: number, sv: number, ph: number, st: ExponentialTrendState, t: number, mudPsi: number,
-  mom: Float64Array,
-): void {
+function exponentFromExpansion(x: Float64Array, R: number, n: Float64Array, st: ExponentialTrendState, t: number, lnObs: number): void {
   const { c0, c1, c2, c3, c4, c5 } = st;
-  let shift = 0;
-  let s1 = 0;
-  let s2 = 0;
-  let nBelow = 0;
-  let nAbove = 0;
-  // The trend and exponent, the exponential and the pressure/fracture/moments pass are three
-  // loops: one loop doing all of it measured about 1.5 times slower (too many live arrays).
   for (let r = 0; r < R; r++) {
     const lnTrend = c0[r] + t * (c1[r] + t * (c2[r] + t * (c3[r] + t * (c4[r] + t * c5[r]))));
-    fr[r] = n[r] * (lnTrend - lnObs); // fr holds the exponent until the pass below
+    x[r] = n[r] * (lnTrend - lnObs);
   }
-  // ratio^n = e^(n·ln ratio) by the table exponential (tableExponential.ts).
-  expByTableInto({ x: fr, out: pp, count: R });
-  {
-    const svr = sv * f[0];
-    const q = svr - (svr - ph) * pp[0];
-    shift = q > svr ? svr : q;
-  }
-  for (let r = 0; r < R; r++) {
-    const svr = sv * f[r];
-    const q = svr - (svr - ph) * pp[r];
-    const p = q > svr ? svr : q;
-    pp[r] = p;
-    const eff = svr - p;
-    const x = p + kF[r] * (eff > 0 ? eff : 0);
-    fr[r] = x;
-    const dv = p - shift;
-    s1 += dv;
-    s2 += dv * dv;
-    if (p > mudPsi) nBelow++;
-    if (x < mudPsi) nAbove++;
-  }
-  mom[0] = s1;
-  mom[1] = s2;
-  mom[2] = shift;
-  mom[3] = nBelow;
-  mom[4] = nAbove;
 }
 
-/** Bowers: Pp = Sv_r − σ_r, virgin or (u given) unloading branch; V ≤ V0 gives σ = 0. */
-function fillBowers(
-  out: Float64Array, R: number, v: number, v0: number, lnA: Float64Array, invB: Float64Array,
-  u: Float64Array | null, lnSigmaMax: Float64Array, f: Float64Array, sv: number,
+/**
+ * Bowers effective stress σ_r, psi, virgin or (u given) unloading branch; V ≤ V0 gives σ = 0
+ * (Pp = Sv, as in bowersPorePressure).
+ */
+function bowersEffectiveStress(
+  sigma: Float64Array, R: number, v: number, v0: number, lnA: Float64Array, invB: Float64Array,
+  u: Float64Array | null, lnSigmaMax: Float64Array,
 ): void {
   if (!(v > v0)) {
-    // At or below V0 the virgin curve gives σ = 0: Pp = Sv (as in bowersPorePressure).
-    for (let r = 0; r < R; r++) out[r] = sv * f[r];
+    sigma.fill(0, 0, R);
     return;
   }
   const lnVV = Math.log(v - v0);
@@ -346,25 +296,41 @@ function fillBowers(
     for (let r = 0; r < R; r++) {
       const lnSigmaVirgin = (lnVV - lnA[r]) * invB[r];
       const lsm = lnSigmaMax[r];
-      out[r] = sv * f[r] - Math.exp(lsm + u[r] * (lnSigmaVirgin - lsm));
+      sigma[r] = Math.exp(lsm + u[r] * (lnSigmaVirgin - lsm));
     }
   } else {
-    for (let r = 0; r < R; r++) out[r] = sv * f[r] - Math.exp((lnVV - lnA[r]) * invB[r]);
+    for (let r = 0; r < R; r++) sigma[r] = Math.exp((lnVV - lnA[r]) * invB[r]);
   }
 }
 
-/** Fracture pressure per realisation, shifted moment sums of Pp, and exceedance counts. */
-function fractureAndMoments(
-  pp: Float64Array, fr: Float64Array, R: number, f: Float64Array, k: Float64Array, sv: number, mudPsi: number, mom: Float64Array,
+/**
+ * Pore pressure, fracture pressure, shifted moment sums of Pp and exceedance counts of one
+ * depth, in one pass. On entry pp holds a per-realisation factor e_r; on return the pore
+ * pressure Pp_r = min(Sv_r − (load·Sv_r + offset)·e_r, Sv_r) (clipped at overburden, as
+ * porepressure/ does):
+ * - Eaton: e = ratio^n, load = 1, offset = −Ph, so Pp = Sv − (Sv − Ph)·ratio^n;
+ * - Bowers: e = σ (psi), load = 0, offset = 1, so Pp = Sv − σ.
+ * Fracture: fr_r = Pp_r + k_r·max(Sv_r − Pp_r, 0). mom gets [s1, s2, shift, nBelow, nAbove]:
+ * sums of (Pp − shift) and its square about shift = Pp of the first realisation, and the
+ * counts of Pp above and fracture pressure below the mud pressure (psi; NaN counts none).
+ */
+function pressureFractureMoments(
+  pp: Float64Array, fr: Float64Array, R: number, f: Float64Array, k: Float64Array,
+  sv: number, load: number, offset: number, mudPsi: number, mom: Float64Array,
 ): void {
-  const shift = pp[0];
+  const sv0 = sv * f[0];
+  const q0 = sv0 - (load * sv0 + offset) * pp[0];
+  const shift = q0 > sv0 ? sv0 : q0;
   let s1 = 0;
   let s2 = 0;
   let nBelow = 0;
   let nAbove = 0;
   for (let r = 0; r < R; r++) {
-    const p = pp[r];
-    const eff = sv * f[r] - p;
+    const svr = sv * f[r];
+    const q = svr - (load * svr + offset) * pp[r];
+    const p = q > svr ? svr : q;
+    pp[r] = p;
+    const eff = svr - p;
     const x = p + k[r] * (eff > 0 ? eff : 0);
     fr[r] = x;
     const d = p - shift;
@@ -632,37 +598,36 @@ function simulateDepthRange(input: PressureUncertaintyInput, i0: number, i1: num
     if (ok && isEaton) ok = z >= 0 && Number.isFinite(z);
     if (ok) {
       const mudPsi = mw === undefined ? NaN : mw[i] * tvdFt[i];
-      let fused = false;
       if (isEaton) {
         let k = 0;
         while (k + 1 < segTops.length && z >= segTops[k + 1]) k++;
         const seg = segDraws[k];
+        // frBuf holds the exponent n·ln(ratio) until pressureFractureMoments overwrites it.
         if (isExpTrend) {
           // Expand about the block's anchor depth; evaluate exactly at the first valid depth
           // of each block, after a segment change, or where the expansion would reach too far.
           // The decision depends only on the inputs since the block began.
           const block = Math.floor(i / TREND_ANCHOR_BLOCK);
           const t = z - anchorZ;
-          const exact = anchorBlock !== block || anchorSeg !== k || !(Math.abs(t) * seg.bAbsMax <= TAYLOR_REACH_MAX);
-          if (exact) {
-            fillEatonExponentialTrend(ppBuf, frBuf, R, seg.a, seg.b, seg.dtMatrix, exponent, factor, z, Math.log(obs), sv, ph, expState);
+          if (anchorBlock !== block || anchorSeg !== k || !(Math.abs(t) * seg.bAbsMax <= TAYLOR_REACH_MAX)) {
+            exponentAtAnchor(frBuf, R, exponent, seg.a, seg.b, seg.dtMatrix, z, Math.log(obs), expState);
             anchorBlock = block;
             anchorSeg = k;
             anchorZ = z;
           } else {
-            stepEatonExponentialFused(ppBuf, frBuf, R, exponent, factor, kFrac, Math.log(obs), sv, ph, expState, t, mudPsi, mom);
-            fused = true;
+            exponentFromExpansion(frBuf, R, exponent, expState, t, Math.log(obs));
           }
+        } else {
+          exponentLogLinear(frBuf, R, exponent, seg.a, seg.b, z, isResistivity ? Math.log(obs) : -Math.log(obs));
         }
-        else fillEatonLogLinearTrend(ppBuf, R, seg.a, seg.b, exponent, factor, z, isResistivity ? Math.log(obs) : -Math.log(obs), sv, ph);
+        expByTableInto({ x: frBuf, out: ppBuf, count: R }); // ratio^n = e^(n·ln ratio)
+        pressureFractureMoments(ppBuf, frBuf, R, factor, kFrac, sv, 1, -ph, mudPsi, mom);
       } else {
         const v = 1e6 / obs; // Bowers works in velocity, ft/s (slowness µs/ft → 10⁶/Δt)
         const unload = hasUnloading && tvdFt[i] >= unloadOnsetFt && v < vmax;
-        fillBowers(ppBuf, R, v, v0, lnA, invB, unload ? uArr : null, lnSigmaMax, factor, sv);
+        bowersEffectiveStress(ppBuf, R, v, v0, lnA, invB, unload ? uArr : null, lnSigmaMax);
+        pressureFractureMoments(ppBuf, frBuf, R, factor, kFrac, sv, 0, 1, mudPsi, mom);
       }
-      // Fracture pressure, moments (shifted sums about the first value) and exceedance counts
-      // (already taken by the fused exponential-trend kernel when it ran).
-      if (!fused) fractureAndMoments(ppBuf, frBuf, R, factor, kFrac, sv, mudPsi, mom);
       const s1 = mom[0];
       const s2 = mom[1];
       const shift = mom[2];
