@@ -29,3 +29,20 @@ export function stressTests() {
     { tvdFt: 12000, pressurePsi: 8600, kind: "LOT", label: "7 in shoe" },
   ];
 }
+
+/**
+ * Monte Carlo input of the benchmark (issue: 1,000 realisations on the 40,000-sample well):
+ * Eaton sonic with the fitted exponential trend and its covariance, exponent N(3, 0.3),
+ * overburden factor N(1, 0.02), Eaton 1969 fracture pressure with ν truncated N(0.42, 0.03)
+ * on [0.3, 0.49], seed 7. `base` is predictPorePressure's result on `well`.
+ */
+export function monteCarloInput(well, base) {
+  return {
+    tvdFt: well.tvdFt, bmlFt: base.bmlFt, overburdenPsi: base.overburden.svPsi, hydrostaticPsi: base.hydrostaticPsi,
+    observed: base.shaleLine.dtUsPerFt,
+    porePressure: { kind: "eaton", exponent: { kind: "normal", mean: 3, std: 0.3 }, trend: base.sonicTrend.trend, trendCovariance: base.sonicTrend.diagnostics.map((d) => d.covariance ?? null) },
+    fracture: { kind: "eaton1969", poissonRatio: { kind: "truncatedNormal", mean: 0.42, std: 0.03, min: 0.3, max: 0.49 } },
+    overburdenFactor: { kind: "normal", mean: 1, std: 0.02 },
+    realisations: 1000, seed: 7,
+  };
+}

@@ -20,7 +20,7 @@ import { spawnSync } from "node:child_process";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { performance } from "node:perf_hooks";
 import { generateBenchWell, BENCH_DATUMS } from "./generateBenchWell.mjs";
-import { benchOptions, STRESS_OPTIONS, stressTests } from "./benchOptions.mjs";
+import { benchOptions, monteCarloInput, STRESS_OPTIONS, stressTests } from "./benchOptions.mjs";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, "..");
@@ -259,13 +259,7 @@ async function benchSize(n) {
     record("segmentation (segmentPressureProfile)", n, await measure(() => sp.segmentPressureProfile({ tvdFt, ppPsi: base.ppPsi, hydrostaticPsi: base.hydrostaticPsi }), { runs: 7, warmup: 1 }));
   }
   if (want("monte") && n === 40000 && typeof sp.simulatePressureUncertainty === "function") {
-    const mcInputOf = () => ({
-      tvdFt, bmlFt, overburdenPsi: base.overburden.svPsi, hydrostaticPsi: base.hydrostaticPsi, observed,
-      porePressure: { kind: "eaton", exponent: { kind: "normal", mean: 3, std: 0.3 }, trend: base.sonicTrend.trend, trendCovariance: base.sonicTrend.diagnostics.map((d) => d.covariance ?? null) },
-      fracture: { kind: "eaton1969", poissonRatio: { kind: "truncatedNormal", mean: 0.42, std: 0.03, min: 0.3, max: 0.49 } },
-      overburdenFactor: { kind: "normal", mean: 1, std: 0.02 },
-      realisations: 1000, seed: 7,
-    });
+    const mcInputOf = () => monteCarloInput(well, base);
     const mc = () => sp.simulatePressureUncertainty(mcInputOf());
     record("Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", n, await measure(mc, { runs: 5, warmup: 1, minMs: 0 }));
     // Same input on both cores: depth parts in worker threads (src/uncertainty-node), equal
@@ -274,6 +268,25 @@ async function benchSize(n) {
     const mcInput = mcInputOf();
     record("Monte Carlo 1,000 × 40,000, 2 threads (Eaton + Eaton 1969)", n, await measure(() => mcNode.simulatePressureUncertaintyParallel(mcInput, { threads: 2 }), { runs: 5, warmup: 1, minMs: 0 }));
     await mcNode.closeUncertaintyWorkers();
+    // The issue's yardstick: the same Monte Carlo as a clean vectorised numpy script
+    // (bench/numpyMonteCarloReference.py) on shalepoint's own draws, when python3 has numpy.
+    const probe = spawnSync("python3", ["-c", "import numpy"], { encoding: "utf8" });
+    if (probe.status === 0) {
+      const dir = fs.mkdtempSync(path.join(os.tmpdir(), "shalepoint-numpy-mc-"));
+      try {
+        const ex = spawnSync(process.execPath, [path.join(here, "exportMonteCarloCase.mjs"), dir, String(n)], { encoding: "utf8" });
+        if (ex.status !== 0) throw new Error(`exportMonteCarloCase failed: ${ex.stderr}`);
+        const py = spawnSync("python3", [path.join(here, "numpyMonteCarloReference.py"), dir, "--runs", quick ? "3" : "5"], { encoding: "utf8", maxBuffer: 1 << 24 });
+        if (py.status !== 0) throw new Error(`numpyMonteCarloReference.py failed: ${py.stderr}`);
+        const j = JSON.parse(py.stdout.trim().split("\n").pop());
+        const worstRel = Math.max(...["ppP10Psi", "ppP50Psi", "ppP90Psi", "fracP10Psi", "fracP50Psi", "fracP90Psi"].map((k) => j.agreement?.[k]?.maxRelDiff ?? NaN));
+        record("numpy reference: same Monte Carlo 1,000 × 40,000", n, { medianMs: j.medianMs, p25Ms: j.p25Ms, p75Ms: j.p75Ms, minMs: j.minMs, runs: j.runs, load1: os.loadavg()[0] }, { numpy: j.numpy, worstQuantileRelDiff: worstRel });
+      } finally {
+        fs.rmSync(dir, { recursive: true, force: true });
+      }
+    } else {
+      console.log("numpy Monte Carlo reference: skipped (python3 with numpy not found)");
+    }
   }
 }
 
