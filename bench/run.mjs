@@ -261,12 +261,12 @@ async function benchSize(n) {
   if (want("monte") && n === 40000 && typeof sp.simulatePressureUncertainty === "function") {
     const mcInputOf = () => monteCarloInput(well, base);
     const mc = () => sp.simulatePressureUncertainty(mcInputOf());
-    record("Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", n, await measure(mc, { runs: 5, warmup: 1, minMs: 0 }));
+    record("Monte Carlo 1,000 × 40,000 (Eaton + Eaton 1969)", n, await measure(mc, { runs: 7, warmup: 2, minMs: 0 }));
     // Same input on both cores: depth parts in worker threads (src/uncertainty-node), equal
     // to the single-thread result bit for bit (tested).
     const mcNode = await import(pathToFileURL(path.join(root, "dist/uncertainty-node/index.js")).href);
     const mcInput = mcInputOf();
-    record("Monte Carlo 1,000 × 40,000, 2 threads (Eaton + Eaton 1969)", n, await measure(() => mcNode.simulatePressureUncertaintyParallel(mcInput, { threads: 2 }), { runs: 5, warmup: 1, minMs: 0 }));
+    record("Monte Carlo 1,000 × 40,000, 2 threads (Eaton + Eaton 1969)", n, await measure(() => mcNode.simulatePressureUncertaintyParallel(mcInput, { threads: 2 }), { runs: 7, warmup: 2, minMs: 0 }));
     await mcNode.closeUncertaintyWorkers();
     // The yardstick: the same Monte Carlo as a clean vectorised numpy script
     // (bench/numpyMonteCarloReference.py) on shalepoint's own draws, when python3 has numpy.
