@@ -6,6 +6,7 @@ import { ShalepointError, type Warning } from "../errors.js";
 import { despikeLog } from "./despikeLog.js";
 import type { SampleWindow } from "./sampleWindow.js";
 import { vshaleFromGammaRay, type VshaleModel } from "./vshaleFromGammaRay.js";
+import { medianInPlace } from "../trend/medianInPlace.js";
 
 /** How a sample is called shale. */
 export type ShaleCriterion =
@@ -64,56 +65,16 @@ function medianOf(values: ArrayLike<number>, members: Int32Array, from: number, 
   let m = 0;
   for (let j = from; j < to; j++) { const v = values[members[j]]; if (v === v) scratch[m++] = v; }
   if (m === 0) return NaN;
-  // Middle order statistic(s) by selection (Hoare's FIND, average linear time) instead of a
-  // full sort: the same values are picked, so the median is the same number.
-  const k = (m - 1) >> 1;
-  selectKth(scratch, m, k);
-  let med: number;
-  if (m % 2 === 1) med = scratch[k];
-  else {
-    // After selection every value right of k is ≥ scratch[k]: the next order statistic is
-    // their minimum.
-    let up = scratch[k + 1];
-    for (let j = k + 2; j < m; j++) if (scratch[j] < up) up = scratch[j];
-    med = 0.5 * (scratch[k] + up);
-  }
+  // Middle order statistic(s) by selection (trend/medianInPlace.ts) instead of a full sort:
+  // the same values are picked, so the median is the same number.
+  const med = medianInPlace(scratch.subarray(0, m));
   if (med === 0) {
     // A sort orders −0 before +0, selection treats them as equal: settle zeros by sorting.
     const sorted = scratch.subarray(0, m).sort();
+    const k = (m - 1) >> 1;
     return m % 2 === 1 ? sorted[k] : 0.5 * (sorted[m / 2 - 1] + sorted[m / 2]);
   }
   return med;
-}
-
-/** Partially order a[0..m): a[k] is the k-th smallest, left of it ≤, right of it ≥ (no NaN). */
-function selectKth(a: Float64Array, m: number, k: number): void {
-  let lo = 0;
-  let hi = m - 1;
-  while (hi > lo) {
-    // Median of three as pivot.
-    const mid = (lo + hi) >> 1;
-    let x = a[lo];
-    let y = a[mid];
-    let z = a[hi];
-    if (x > y) { const t = x; x = y; y = t; }
-    if (y > z) { y = z; }
-    if (x > y) { y = x; }
-    const pivot = y;
-    let i = lo;
-    let j = hi;
-    while (i <= j) {
-      while (a[i] < pivot) i++;
-      while (a[j] > pivot) j--;
-      if (i <= j) {
-        const t = a[i]; a[i] = a[j]; a[j] = t;
-        i++;
-        j--;
-      }
-    }
-    if (k <= j) hi = j;
-    else if (k >= i) lo = i;
-    else return;
-  }
 }
 
 /**

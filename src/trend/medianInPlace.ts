@@ -1,6 +1,7 @@
 /**
  * Median by selection, the shared numerical helper of the robust fits (Huber scale in
- * fitStraightLineHuber.ts, the noise scale and depth step of the change-point segmentation).
+ * fitStraightLineHuber.ts, the noise scale and depth step of the change-point segmentation)
+ * and of the shale-point medians (logs/pickShalePoints.ts).
  *
  * Imports: nothing.
  */
