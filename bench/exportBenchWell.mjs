@@ -18,6 +18,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { writeRawFloat64 } from "./rawFloat64.mjs";
 import { generateBenchWell, BENCH_DATUMS } from "./generateBenchWell.mjs";
 import { benchOptions } from "./benchOptions.mjs";
 
@@ -32,13 +33,7 @@ if (!(Number.isInteger(samples) && samples >= 1000) || !outDir) {
 }
 fs.mkdirSync(outDir, { recursive: true });
 
-/** Write a Float64Array as raw little-endian float64 (the platform order is checked). */
-function writeF64(name, values) {
-  const a = Float64Array.from(values);
-  if (new Uint8Array(new Float64Array([1]).buffer)[7] !== 0x3f) throw new Error("big-endian platform: byte swap needed");
-  fs.writeFileSync(path.join(outDir, `${name}.f64`), new Uint8Array(a.buffer, a.byteOffset, a.byteLength));
-  return `${name}.f64`;
-}
+const writeF64 = (name, values) => writeRawFloat64(outDir, name, values);
 
 const { well } = generateBenchWell({ samples });
 const c = well.curves;

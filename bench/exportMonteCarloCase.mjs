@@ -19,6 +19,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { writeRawFloat64 } from "./rawFloat64.mjs";
 import { generateBenchWell } from "./generateBenchWell.mjs";
 import { benchOptions, monteCarloInput } from "./benchOptions.mjs";
 
@@ -33,13 +34,7 @@ if (!outDir || !(Number.isInteger(samples) && samples >= 1000)) {
 }
 fs.mkdirSync(outDir, { recursive: true });
 
-/** Write values as raw little-endian float64 (the platform order is checked). */
-function writeF64(name, values) {
-  const a = Float64Array.from(values);
-  if (new Uint8Array(new Float64Array([1]).buffer)[7] !== 0x3f) throw new Error("big-endian platform: byte swap needed");
-  fs.writeFileSync(path.join(outDir, `${name}.f64`), new Uint8Array(a.buffer, a.byteOffset, a.byteLength));
-  return `${name}.f64`;
-}
+const writeF64 = (name, values) => writeRawFloat64(outDir, name, values);
 
 const sp = await import(pathToFileURL(path.join(root, "dist/index.js")).href);
 const { well } = generateBenchWell({ samples });
