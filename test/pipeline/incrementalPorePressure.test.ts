@@ -6,6 +6,7 @@
  */
 import { describe, it, expect } from "vitest";
 import { loadDemoWell } from "./demoWells.js";
+import { wellHead } from "../helpers/wellHead.js";
 import { predictPorePressure, type PorePressurePredictionOptions, type PorePressurePrediction } from "../../src/pipeline/predictPorePressure.js";
 import { startWhileDrilling, appendDepthSamples, copyWhileDrillingState, type DepthSampleChunk } from "../../src/pipeline/incrementalPorePressure.js";
 import type { Well } from "../../src/well/types.js";
@@ -26,12 +27,6 @@ function optionsFor(): PorePressurePredictionOptions {
     equivalentDepth: true,
     primary: "eatonSonic",
   };
-}
-
-function head(well: Well, n: number): Well {
-  const curves: Well["curves"] = {};
-  for (const [k, c] of Object.entries(well.curves)) curves[k] = { ...c, values: c.values.slice(0, n) };
-  return { ...well, mdFt: well.mdFt.slice(0, n), tvdFt: well.tvdFt.slice(0, n), curves };
 }
 
 function chunk(well: Well, from: number, to: number): DepthSampleChunk {
@@ -95,7 +90,7 @@ describe("appendDepthSamples", () => {
     // Own case: start below the trend's fit interval, then add 500, 1, 37 and the rest.
     let start = 0;
     while (a1.well.tvdFt[start] < mudline + 4300 + 500) start++;
-    let state = startWhileDrilling(head(a1.well, start), optionsFor());
+    let state = startWhileDrilling(wellHead(a1.well, start), optionsFor());
     const cuts = [start + 500, start + 501, start + 538, n];
     let from = start;
     for (const to of cuts) {
@@ -113,7 +108,7 @@ describe("appendDepthSamples", () => {
   it("refits a trend whose fit interval the new samples reach, and still equals the full run", () => {
     let start = 0;
     while (a1.well.tvdFt[start] < mudline + 2500) start++;
-    let state = startWhileDrilling(head(a1.well, start), optionsFor());
+    let state = startWhileDrilling(wellHead(a1.well, start), optionsFor());
     state = appendDepthSamples(state, chunk(a1.well, start, n));
     expect(state.recomputedFromIndex).toBe(0); // trend moved: every sample recomputed
     expectSame(state.prediction, full);
@@ -125,7 +120,7 @@ describe("appendDepthSamples", () => {
     const fullFrozen = predictPorePressure(a1.well, opts);
     let start = 0;
     while (a1.well.tvdFt[start] < mudline + 3000) start++;
-    let state = startWhileDrilling(head(a1.well, start), opts);
+    let state = startWhileDrilling(wellHead(a1.well, start), opts);
     state = appendDepthSamples(state, chunk(a1.well, start, start + 800));
     state = appendDepthSamples(state, chunk(a1.well, start + 800, n));
     expectSame(state.prediction, fullFrozen);
@@ -146,7 +141,7 @@ describe("appendDepthSamples", () => {
     const nB = b1.well.tvdFt.length;
     let start = 0;
     while (b1.well.tvdFt[start] < 3780 * m + 300) start++;
-    let state = startWhileDrilling(head(b1.well, start), opts);
+    let state = startWhileDrilling(wellHead(b1.well, start), opts);
     state = appendDepthSamples(state, chunk(b1.well, start, start + 700));
     state = appendDepthSamples(state, chunk(b1.well, start + 700, nB));
     expect(state.prediction.methods.bowers!.vmaxFtPerS).toBe(fullB1.methods.bowers!.vmaxFtPerS);
@@ -156,7 +151,7 @@ describe("appendDepthSamples", () => {
   it("extends a state's buffers in place: only the latest state may be extended; a copy stays as it was", () => {
     let start = 0;
     while (a1.well.tvdFt[start] < mudline + 4300 + 500) start++;
-    const given = head(a1.well, start);
+    const given = wellHead(a1.well, start);
     const givenTvd = Float64Array.from(given.tvdFt);
     const s0 = startWhileDrilling(given, optionsFor());
     const kept = copyWhileDrillingState(s0);
@@ -184,7 +179,7 @@ describe("appendDepthSamples", () => {
   });
 
   it("rejects samples above the current end and calibration refits", () => {
-    const state = startWhileDrilling(head(a1.well, 20000), optionsFor());
+    const state = startWhileDrilling(wellHead(a1.well, 20000), optionsFor());
     expect(() => appendDepthSamples(state, chunk(a1.well, 19990, 20010))).toThrow(/below the current end/);
     const opts = { ...optionsFor(), calibration: { observations: [], fitEatonExponents: true } };
     expect(() => startWhileDrilling(a1.well, opts)).toThrow(expect.objectContaining({ code: "E_INCREMENTAL_UNSUPPORTED" }));

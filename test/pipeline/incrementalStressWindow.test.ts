@@ -8,6 +8,7 @@
  */
 import { describe, it, expect } from "vitest";
 import { loadDemoWell } from "./demoWells.js";
+import { wellHead } from "../helpers/wellHead.js";
 import { predictPorePressure, type PorePressurePredictionOptions } from "../../src/pipeline/predictPorePressure.js";
 import { predictStressWindow, type StressWindowOptions } from "../../src/pipeline/predictStressWindow.js";
 import { startWhileDrilling, appendDepthSamples, type DepthSampleChunk } from "../../src/pipeline/incrementalPorePressure.js";
@@ -25,12 +26,6 @@ const ppOptions: PorePressurePredictionOptions = {
   eatonSonic: {},
   primary: "eatonSonic",
 };
-
-function head(well: Well, n: number): Well {
-  const curves: Well["curves"] = {};
-  for (const [k, c] of Object.entries(well.curves)) curves[k] = { ...c, values: c.values.slice(0, n) };
-  return { ...well, mdFt: well.mdFt.slice(0, n), tvdFt: well.tvdFt.slice(0, n), curves };
-}
 
 function chunk(well: Well, from: number, to: number): DepthSampleChunk {
   const curves: Record<string, Float64Array> = {};
@@ -80,7 +75,7 @@ describe("refreshStressWindow", () => {
   for (const calibrate of [false, true]) {
     it(`equals predictStressWindow on the whole demo well after pore-pressure appends (bit for bit; calibrateFracture ${calibrate})`, () => {
       const options = windowOptions(calibrate);
-      let pp = startWhileDrilling(head(a1.well, start), ppOptions);
+      let pp = startWhileDrilling(wellHead(a1.well, start), ppOptions);
       let win = startStressWindowWhileDrilling(inputOf(pp.prediction), options);
       // the start equals the full run on the well so far
       expect(serial(win.prediction)).toBe(serial(predictStressWindow(inputOf(pp.prediction), { ...options, wellbore: { ...options.wellbore, dtUsPerFt: pp.prediction.shaleLine.dtUsPerFt } })));
@@ -107,7 +102,7 @@ describe("refreshStressWindow", () => {
 
   it("takes a leak-off test added once drilled (new options: every sample recomputed, ν recalibrated) and still equals the full run", () => {
     const options = windowOptions(true);
-    let pp = startWhileDrilling(head(a1.well, start), ppOptions);
+    let pp = startWhileDrilling(wellHead(a1.well, start), ppOptions);
     let win = startStressWindowWhileDrilling(inputOf(pp.prediction), options);
     pp = appendDepthSamples(pp, chunk(a1.well, start, n));
     win = refreshStressWindow(win, inputOf(pp.prediction), pp.recomputedFromIndex);
@@ -123,11 +118,11 @@ describe("refreshStressWindow", () => {
   });
 
   it("refuses a superseded state, a shorter well and per-sample coefficient curves", () => {
-    const p0 = predictPorePressure(head(a1.well, start), ppOptions);
+    const p0 = predictPorePressure(wellHead(a1.well, start), ppOptions);
     const win0 = startStressWindowWhileDrilling(inputOf(p0), windowOptions(false));
     const win1 = refreshStressWindow(win0, inputOf(p0), start);
     expect(() => refreshStressWindow(win0, inputOf(p0), start)).toThrow(expect.objectContaining({ code: "E_STATE_SUPERSEDED" }));
-    const shorter = predictPorePressure(head(a1.well, start - 10), ppOptions);
+    const shorter = predictPorePressure(wellHead(a1.well, start - 10), ppOptions);
     expect(() => refreshStressWindow(win1, inputOf(shorter), 0)).toThrow(expect.objectContaining({ code: "E_RANGE" }));
     const nuCurve = { ...windowOptions(false), fracture: { method: "eaton1969" as const, poissonRatio: new Float64Array(start).fill(0.4) } };
     expect(() => startStressWindowWhileDrilling(inputOf(p0), nuCurve)).toThrow(expect.objectContaining({ code: "E_INCREMENTAL_UNSUPPORTED" }));
